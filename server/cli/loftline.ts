@@ -2,12 +2,12 @@
 // Each command lives in ./commands/<name>.ts and exports `run(argv: string[]): Promise<number>` (the exit code)
 // and `summary: string` (one line for the help text).
 import { readdirSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
 
 type Command = { run: (argv: string[]) => Promise<number>; summary: string };
 
-const dir = join(dirname(fileURLToPath(import.meta.url)), 'commands');
+const dir = join(__dirname, 'commands');
 
 function commandNames(): string[] {
   return readdirSync(dir)

@@ -1,10 +1,10 @@
 // Runs every benchmark module in this folder (files named *.bench.ts), one after another, on one core.
 // Each module exports `run(): Promise<void>` and prints its own figures; nothing here asserts a time.
 import { readdirSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
 
-const here = dirname(fileURLToPath(import.meta.url));
+const here = __dirname;
 const only = process.argv.slice(2);
 
 async function main(): Promise<void> {
