@@ -1,0 +1,3 @@
+export * from './cable-table';
+export * from './loss';
+export * from './coax-run';

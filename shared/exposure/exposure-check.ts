@@ -1,0 +1,103 @@
+import { SAFETY_CAUTION } from '../clearance/cautions';
+import { type PlanePoint, type PlaneShape, pointSegmentDistanceM, segmentShapeDistanceM } from '../clearance/planar';
+import type { Clearance } from '../clearance/types';
+import { fmtM } from '../clearance/types';
+import { MPE_SOURCE } from './mpe-limits';
+import { type ExposureDistances, type ExposureInput, OET65_SOURCE, exposureDistances } from './oet65';
+
+export type ExposureCheckInput = ExposureInput & {
+  /** Where the radiating wire lies in plan. */
+  wire: readonly [PlanePoint, PlanePoint][];
+  /** Paths, roads and parking (where the public is). */
+  publicAreas: readonly { id: string; kind: string; shape: PlaneShape }[];
+  operatingPositions: readonly { id: string; at: PlanePoint }[];
+  /** How the gain toward people was taken, for the message. */
+  gainNote: string;
+};
+
+export type ExposureResult = ExposureDistances & { gainDbi: number; gainNote: string; results: Clearance[] };
+
+const SOURCE = `${MPE_SOURCE}; ${OET65_SOURCE}`;
+
+function wireDistanceToShapeM(wire: ExposureCheckInput['wire'], shape: PlaneShape): number {
+  let best = Infinity;
+  for (const [a, b] of wire) best = Math.min(best, segmentShapeDistanceM(a, b, shape));
+  return best;
+}
+
+function wireDistanceToPointM(wire: ExposureCheckInput['wire'], p: PlanePoint): number {
+  let best = Infinity;
+  for (const [a, b] of wire) best = Math.min(best, pointSegmentDistanceM(p, a, b));
+  return best;
+}
+
+/**
+ * RF exposure for one antenna: the public (uncontrolled limit) must be outside the uncontrolled distance
+ * from the wire, the operators (controlled limit) outside the controlled one. Horizontal distance from the
+ * nearest point of the wire is used, which is never more than the true distance (conservative).
+ */
+export function exposureCheck(input: ExposureCheckInput): ExposureResult {
+  const d = exposureDistances(input);
+  const uM = d.distanceM.uncontrolled;
+  const cM = d.distanceM.controlled;
+  const basis =
+    `${d.averagePowerW.toFixed(0)} W average (duty ${Math.round(input.dutyFactor * 100)} %), ${input.gainDbi.toFixed(1)} dBi ` +
+    `${input.gainNote} at ${input.freqMhz.toFixed(2)} MHz`;
+  const results: Clearance[] = [];
+  let nearest: { id: string; kind: string; distanceM: number } | null = null;
+  for (const area of input.publicAreas) {
+    const distanceM = wireDistanceToShapeM(input.wire, area.shape);
+    if (!nearest || distanceM < nearest.distanceM) nearest = { id: area.id, kind: area.kind, distanceM };
+  }
+  const rule = 'the public stays outside the uncontrolled-exposure distance from the wire';
+  if (!nearest) {
+    results.push({
+      key: 'rf-exposure:public',
+      kind: 'rf-exposure',
+      level: 'needs-review',
+      distanceM: null,
+      requiredM: uM,
+      rule,
+      source: SOURCE,
+      message: `No path, road or parking is recorded, so where the public walks is unknown: keep them ${fmtM(uM)} from the wire (${basis}).`,
+      caution: SAFETY_CAUTION,
+    });
+  } else {
+    const inside = nearest.distanceM < uM;
+    results.push({
+      key: 'rf-exposure:public',
+      kind: 'rf-exposure',
+      level: inside ? 'needs-review' : 'clear',
+      distanceM: nearest.distanceM,
+      requiredM: uM,
+      rule,
+      source: SOURCE,
+      message: inside
+        ? `${nearest.kind} ${nearest.id} is ${fmtM(nearest.distanceM)} from the wire, inside the public distance ${fmtM(uM)} (${basis}): rope off or reduce power.`
+        : `Nearest public area (${nearest.kind} ${nearest.id}) is ${fmtM(nearest.distanceM)} from the wire, outside the public distance ${fmtM(uM)} (${basis}).`,
+      caution: SAFETY_CAUTION,
+    });
+  }
+  let op: { id: string; distanceM: number } | null = null;
+  for (const p of input.operatingPositions) {
+    const distanceM = wireDistanceToPointM(input.wire, p.at);
+    if (!op || distanceM < op.distanceM) op = { id: p.id, distanceM };
+  }
+  if (op) {
+    const inside = op.distanceM < cM;
+    results.push({
+      key: 'rf-exposure:operators',
+      kind: 'rf-exposure',
+      level: inside ? 'needs-review' : 'clear',
+      distanceM: op.distanceM,
+      requiredM: cM,
+      rule: 'operators stay outside the controlled-exposure distance from the wire',
+      source: SOURCE,
+      message: inside
+        ? `Operating position ${op.id} is ${fmtM(op.distanceM)} from the wire, inside the operators' distance ${fmtM(cM)} (${basis}).`
+        : `Operating position ${op.id} is ${fmtM(op.distanceM)} from the wire, outside the operators' distance ${fmtM(cM)}.`,
+      caution: SAFETY_CAUTION,
+    });
+  }
+  return { ...d, gainDbi: input.gainDbi, gainNote: input.gainNote, results };
+}
