@@ -1,0 +1,15 @@
+export { Badge } from './badge';
+export { Button } from './button';
+export { Card } from './card';
+export { DataTable, type Column } from './data-table';
+export { EmptyState } from './empty-state';
+export { ErrorText } from './error-text';
+export { FormNumberField, FormSelect, FormTextField } from './form-fields';
+export { Icon } from './icon';
+export { ListRow } from './list-row';
+export { NumberField, parseNumberText } from './number-field';
+export { Screen } from './screen';
+export { Select, type SelectOption } from './select';
+export { Tabular } from './tabular';
+export { Txt } from './text';
+export { TextField } from './text-field';
