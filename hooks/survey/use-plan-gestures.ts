@@ -23,7 +23,8 @@ function originOf(ref: React.RefObject<View | null>): ScreenPoint {
   const node = ref.current as unknown as { getBoundingClientRect?: () => { left: number; top: number } } | null;
   if (Platform.OS === 'web' && node?.getBoundingClientRect) {
     const r = node.getBoundingClientRect();
-    return { x: r.left + (globalThis as { scrollX?: number }).scrollX! || r.left, y: r.top + ((globalThis as { scrollY?: number }).scrollY ?? 0) };
+    const page = globalThis as { scrollX?: number; scrollY?: number };
+    return { x: r.left + (page.scrollX ?? 0), y: r.top + (page.scrollY ?? 0) };
   }
   return { x: 0, y: 0 };
 }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { M_PER_FT, niceFloor, scaleBar } from './scale-bar';
+import { M_PER_FT } from '../../../hooks/length-format';
+import { niceFloor, scaleBar } from './scale-bar';
 
 describe('scale bar (1-2-5 series, metres or feet)', () => {
   it('niceFloor picks the largest 1·2·5 × 10^k not above the value', () => {

@@ -3,10 +3,9 @@
  * (the user's units setting), as long as possible without passing `maxPx`.
  */
 
-export type UnitSystem = 'metric' | 'imperial';
-export type ScaleBar = { lengthM: number; px: number; label: string };
+import { M_PER_FT, type UnitSystem } from '../../../hooks/length-format';
 
-export const M_PER_FT = 0.3048; // exact, international foot (1959 agreement; NIST SP 811)
+export type ScaleBar = { lengthM: number; px: number; label: string };
 
 /** The largest 1·2·5 × 10^k value not above `x` (x > 0). */
 export function niceFloor(x: number): number {
