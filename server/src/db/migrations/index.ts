@@ -1,0 +1,6 @@
+// Every migration, in the order it runs. Add yours as a new file `<13-digit-ms-timestamp>-<name>.ts` and append
+// its class here (classes, not globs: TypeORM's glob loading does not work under tsx).
+import { InitialSchema1796163364737 } from './1796163364737-initial-schema';
+import { PhotoUploads1796163535135 } from './1796163535135-photo-uploads';
+
+export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135];

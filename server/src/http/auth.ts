@@ -1,0 +1,126 @@
+// Route guards: requireUser (a valid access token), requireMembership (member of :clubId, else 404 — another
+// club's data does not even admit it exists), requireAbility (the member's role grants it, else 403).
+import type { RequestHandler } from 'express';
+import { Passport } from 'passport';
+import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
+import { can, idSchema, type Ability, type Role } from '../../../shared/schemas';
+import type { AppDeps } from '../app-deps';
+import { MembershipEntity, UserEntity } from '../db/entities';
+import { AppError } from './errors';
+import { ACCESS_TOKEN_AUDIENCE, ACCESS_TOKEN_ISSUER, type AccessTokenPayload } from './access-token';
+
+export interface AuthUser {
+  id: string;
+  email: string;
+  displayName: string;
+  callSign: string;
+}
+
+export interface ClubMembership {
+  clubId: string;
+  userId: string;
+  role: Role;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // passport's Request.user is an (empty) Express.User: give it our shape.
+    interface User extends AuthUser {}
+    interface Request {
+      membership?: ClubMembership;
+    }
+  }
+}
+
+export interface AuthGuards {
+  requireUser: RequestHandler;
+  requireMembership: RequestHandler;
+}
+
+const guardsByDeps = new WeakMap<AppDeps, AuthGuards>();
+
+function explainJwtFailure(info: unknown): AppError {
+  const name = info instanceof Error ? info.name : '';
+  const message = info instanceof Error ? info.message : '';
+  if (name === 'TokenExpiredError') return new AppError('token_expired', 'unauthenticated', 'your session has expired: refresh it or sign in again');
+  if (message === 'No auth token') return new AppError('unauthenticated', 'unauthenticated', 'sign in first: send Authorization: Bearer <access token>');
+  if (name === 'NotBeforeError') return new AppError('token_invalid', 'unauthenticated', 'this access token is not valid yet');
+  return new AppError('token_invalid', 'unauthenticated', 'the access token is not valid (tampered, malformed or signed by another server): sign in again');
+}
+
+/** Guards bound to one app's secret and database (memoised per deps). */
+export function authGuards(deps: AppDeps): AuthGuards {
+  const known = guardsByDeps.get(deps);
+  if (known) return known;
+
+  const passport = new Passport();
+  passport.use(
+    new JwtStrategy(
+      {
+        jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+        secretOrKey: deps.config.jwtSecret,
+        algorithms: ['HS256'],
+        issuer: ACCESS_TOKEN_ISSUER,
+        audience: ACCESS_TOKEN_AUDIENCE,
+      },
+      (payload: AccessTokenPayload, done: (err: unknown, user?: AuthUser | false, info?: unknown) => void) => {
+        if (payload.typ !== 'access' || !idSchema.safeParse(payload.sub).success) {
+          done(null, false, new Error('not an access token'));
+          return;
+        }
+        deps.dataSource
+          .getRepository(UserEntity)
+          .findOneBy({ id: payload.sub })
+          .then((u) => {
+            if (!u) done(null, false, new Error('account no longer exists'));
+            else done(null, { id: u.id, email: u.email, displayName: u.displayName, callSign: u.callSign });
+          }, done);
+      },
+    ),
+  );
+
+  const requireUser: RequestHandler = (req, res, next) => {
+    passport.authenticate('jwt', { session: false }, (err: unknown, user: AuthUser | false, info: unknown) => {
+      if (err) return next(err);
+      if (!user) {
+        if (info instanceof Error && info.message === 'account no longer exists') {
+          return next(new AppError('token_invalid', 'unauthenticated', 'this account no longer exists'));
+        }
+        return next(explainJwtFailure(info));
+      }
+      req.user = user;
+      next();
+    })(req, res, next);
+  };
+
+  const requireMembership: RequestHandler = async (req, _res, next) => {
+    if (!req.user) return next(new AppError('unauthenticated', 'unauthenticated', 'sign in first'));
+    const clubId = req.params.clubId;
+    // A malformed id is "no such club" to the caller, as is a club they do not belong to.
+    if (typeof clubId !== 'string' || !idSchema.safeParse(clubId).success) return next(new AppError('not_found', 'not_found', 'club not found'));
+    const m = await deps.dataSource.getRepository(MembershipEntity).findOneBy({ clubId, userId: req.user.id });
+    if (!m) return next(new AppError('not_found', 'not_found', 'club not found'));
+    req.membership = { clubId, userId: m.userId, role: m.role };
+    next();
+  };
+
+  const guards = { requireUser, requireMembership };
+  guardsByDeps.set(deps, guards);
+  return guards;
+}
+
+export const requireUser = (deps: AppDeps): RequestHandler => authGuards(deps).requireUser;
+export const requireMembership = (deps: AppDeps): RequestHandler => authGuards(deps).requireMembership;
+
+/** 403 unless the member's role in this club grants `ability` (use after requireMembership). */
+export function requireAbility(ability: Ability): RequestHandler {
+  return (req, _res, next) => {
+    const m = req.membership;
+    if (!m) return next(new AppError('not_found', 'not_found', 'club not found'));
+    if (!can(m.role, ability)) {
+      return next(new AppError('forbidden', 'forbidden', `your role in this club (${m.role}) does not allow this`, { needs: ability, role: m.role }));
+    }
+    next();
+  };
+}
