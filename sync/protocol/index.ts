@@ -1,0 +1,5 @@
+export * from './hlc';
+export * from './clock-rules';
+export * from './versions';
+export * from './messages';
+export * from './field-rules';
