@@ -2,3 +2,4 @@ export * from './common';
 export * from './roles';
 export * from './identity';
 export * from './records';
+export * from './photo-upload';

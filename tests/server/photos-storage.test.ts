@@ -1,20 +1,16 @@
 // One contract suite for every PhotoStorage driver: the folder driver, and the S3 driver against s3rver (a local
-// S3-compatible fake from the npm registry, listening on 127.0.0.1 port 0). The SHA-256 reference is Node's
-// OpenSSL-backed node:crypto (FIPS 180-4).
-import { createHash, randomBytes, randomUUID } from 'node:crypto';
+// S3-compatible fake from the npm registry; see photos-fixtures.ts).
+import { randomBytes, randomUUID } from 'node:crypto';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buffer } from 'node:stream/consumers';
-import { CreateBucketCommand, S3Client } from '@aws-sdk/client-s3';
-import S3rver from 's3rver';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { FsPhotoStorage } from '../../server/src/modules/photos/fs-storage';
 import type { PhotoStorage } from '../../server/src/modules/photos/photo-storage';
 import { photoStorageFromEnv } from '../../server/src/modules/photos/photo-storage-config';
 import { S3PhotoStorage } from '../../server/src/modules/photos/s3-storage';
-
-const sha = (b: Buffer) => createHash('sha256').update(b).digest('hex');
+import { sha, startFakeS3 } from './photos-fixtures';
 
 async function upload(storage: PhotoStorage, uploadId: string, bytes: Buffer, chunkBytes: number): Promise<void> {
   for (let offset = 0; offset < bytes.length; offset += chunkBytes) {
@@ -38,21 +34,13 @@ const fsDriver: Driver = {
 const s3Driver: Driver = {
   name: 'S3 driver (s3-storage) against s3rver',
   async open() {
-    const dir = mkdtempSync(join(tmpdir(), 'loftline-s3rver-'));
-    const server = new S3rver({ port: 0, address: '127.0.0.1', silent: true, directory: dir });
-    const { port } = await server.run();
-    const endpoint = `http://127.0.0.1:${port}`;
-    const credentials = { accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' };
-    const admin = new S3Client({ endpoint, region: 'us-east-1', forcePathStyle: true, credentials });
-    await admin.send(new CreateBucketCommand({ Bucket: 'loftline-photos' }));
-    admin.destroy();
-    const storage = new S3PhotoStorage({ endpoint, bucket: 'loftline-photos', region: 'us-east-1', forcePathStyle: true, ...credentials });
+    const s3 = await startFakeS3();
+    const storage = new S3PhotoStorage({ endpoint: s3.endpoint, bucket: s3.bucket, region: 'us-east-1', forcePathStyle: true, ...s3.credentials });
     return {
       storage,
       close: async () => {
         storage.destroy();
-        await server.close();
-        rmSync(dir, { recursive: true, force: true });
+        await s3.close();
       },
     };
   },
