@@ -24,6 +24,7 @@ export const envSchema = z
     SMTP_FROM: z.preprocess(blankToUndefined, z.string().default('Loftline <loftline@localhost>')),
     LOG_LEVEL: z.enum(LOG_LEVELS, { message: `LOG_LEVEL must be one of ${LOG_LEVELS.join(', ')}` }).default('info'),
     AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+    AUTH_RATE_LIMIT_PER_IP: z.coerce.number().int().min(1).default(50),
   })
   .refine((e) => e.MAIL_TRANSPORT !== 'smtp' || !!e.SMTP_HOST, { message: 'MAIL_TRANSPORT=smtp needs SMTP_HOST', path: ['SMTP_HOST'] });
 
@@ -47,8 +48,11 @@ export interface Config {
     smtp?: { host: string; port: number; user?: string; pass?: string };
   };
   logLevel: (typeof LOG_LEVELS)[number];
-  /** Sign-in and forgot-password attempts allowed per window, per IP and per e-mail. */
-  authRateLimit: { max: number; windowMs: number };
+  /**
+   * Failed sign-ins and reset requests allowed per window: `max` per e-mail address, `ipMax` per client address
+   * (higher, as a whole club may share one address at the field).
+   */
+  authRateLimit: { max: number; ipMax: number; windowMs: number };
   /** Largest JSON body accepted (body-parser syntax). */
   jsonLimit: string;
 }
@@ -95,7 +99,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, secret: (dataDi
       smtp: e.SMTP_HOST ? { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, pass: e.SMTP_PASS } : undefined,
     },
     logLevel: e.LOG_LEVEL,
-    authRateLimit: { max: e.AUTH_RATE_LIMIT, windowMs: 15 * 60 * 1000 },
+    authRateLimit: { max: e.AUTH_RATE_LIMIT, ipMax: e.AUTH_RATE_LIMIT_PER_IP, windowMs: 15 * 60 * 1000 },
     jsonLimit: '2mb',
   };
 }

@@ -77,7 +77,7 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
   await dataSource.initialize();
 
   const base = loadConfig({ LOG_LEVEL: 'silent', DATA_DIR: '/tmp/loftline-test-unused' }, () => randomBytes(32).toString('hex'));
-  const config: Config = { ...base, authRateLimit: { max: 1000, windowMs: 15 * 60_000 }, ...opts.config };
+  const config: Config = { ...base, authRateLimit: { max: 1000, ipMax: 1000, windowMs: 15 * 60_000 }, ...opts.config };
   const mailbox = opts.mail instanceof TestMailbox ? opts.mail : new TestMailbox();
   const deps: AppDeps = {
     dataSource,

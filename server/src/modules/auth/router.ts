@@ -21,14 +21,14 @@ function emailKey(req: Request): string | null {
 
 /** Two limits on the same route: per client address and per e-mail address (a spread-out guessing run). */
 function attemptLimits(deps: AppDeps, what: string, countSuccesses: boolean): RequestHandler[] {
-  const { max, windowMs } = deps.config.authRateLimit;
+  const { max, ipMax, windowMs } = deps.config.authRateLimit;
   const minutes = Math.ceil(windowMs / 60_000);
   const handler: RequestHandler = (_req, _res, next) =>
     next(new AppError('rate_limited', 'rate_limited', `too many ${what} attempts: wait ${minutes} minutes and try again`));
-  const common = { windowMs, limit: max, standardHeaders: 'draft-8', legacyHeaders: false, skipSuccessfulRequests: !countSuccesses, handler } as const;
+  const common = { windowMs, standardHeaders: 'draft-8', legacyHeaders: false, skipSuccessfulRequests: !countSuccesses, handler } as const;
   return [
-    rateLimit({ ...common }),
-    rateLimit({ ...common, keyGenerator: (req) => emailKey(req) ?? 'no-email', skip: (req) => emailKey(req) === null }),
+    rateLimit({ ...common, limit: ipMax }),
+    rateLimit({ ...common, limit: max, keyGenerator: (req) => emailKey(req) ?? 'no-email', skip: (req) => emailKey(req) === null }),
   ];
 }
 
