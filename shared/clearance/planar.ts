@@ -85,3 +85,30 @@ export function planeBearingDeg(a: PlanePoint, b: PlanePoint): number {
   const deg = (Math.atan2(b.eastM - a.eastM, b.northM - a.northM) * 180) / Math.PI;
   return (deg + 360) % 360;
 }
+
+function closestOnSegment(p: PlanePoint, a: PlanePoint, b: PlanePoint): PlanePoint {
+  const dx = b.eastM - a.eastM;
+  const dy = b.northM - a.northM;
+  const len2 = dx * dx + dy * dy;
+  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.eastM - a.eastM) * dx + (p.northM - a.northM) * dy) / len2));
+  return { eastM: a.eastM + t * dx, northM: a.northM + t * dy };
+}
+
+/** The point of the shape nearest to p (p itself when inside a closed outline). */
+export function closestPointOnShape(p: PlanePoint, shape: PlaneShape): PlanePoint {
+  const pts = shape.points;
+  if (pts.length === 1) return pts[0];
+  if (shape.closed && pts.length >= 3 && insidePolygon(p, pts)) return p;
+  let best = pts[0];
+  let bestD = Infinity;
+  const n = shape.closed ? pts.length : pts.length - 1;
+  for (let i = 0; i < n; i++) {
+    const q = closestOnSegment(p, pts[i], pts[(i + 1) % pts.length]);
+    const d = planeDistanceM(p, q);
+    if (d < bestD) {
+      bestD = d;
+      best = q;
+    }
+  }
+  return best;
+}

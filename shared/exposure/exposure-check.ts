@@ -1,5 +1,5 @@
 import { SAFETY_CAUTION } from '../clearance/cautions';
-import { type PlanePoint, type PlaneShape, pointSegmentDistanceM, segmentShapeDistanceM } from '../clearance/planar';
+import { type PlanePoint, type PlaneShape, closestPointOnShape, pointSegmentDistanceM, segmentShapeDistanceM } from '../clearance/planar';
 import type { Clearance } from '../clearance/types';
 import { fmtM } from '../clearance/types';
 import { MPE_SOURCE } from './mpe-limits';
@@ -13,6 +13,9 @@ export type ExposureCheckInput = ExposureInput & {
   operatingPositions: readonly { id: string; at: PlanePoint }[];
   /** How the gain toward people was taken, for the message. */
   gainNote: string;
+  /** The antenna centre, and the gain (dBi) toward a point; without it gainDbi is used in every direction. */
+  centre?: PlanePoint;
+  gainTowardDbi?: (toward: PlanePoint) => number;
 };
 
 export type ExposureResult = ExposureDistances & { gainDbi: number; gainNote: string; results: Clearance[] };
@@ -44,10 +47,17 @@ export function exposureCheck(input: ExposureCheckInput): ExposureResult {
     `${d.averagePowerW.toFixed(0)} W average (duty ${Math.round(input.dutyFactor * 100)} %), ${input.gainDbi.toFixed(1)} dBi ` +
     `${input.gainNote} at ${input.freqMhz.toFixed(2)} MHz`;
   const results: Clearance[] = [];
-  let nearest: { id: string; kind: string; distanceM: number } | null = null;
+  // Each area is checked with the gain toward it; the area with the least margin is reported.
+  let nearest: { id: string; kind: string; distanceM: number; requiredM: number; gainDbi: number } | null = null;
   for (const area of input.publicAreas) {
     const distanceM = wireDistanceToShapeM(input.wire, area.shape);
-    if (!nearest || distanceM < nearest.distanceM) nearest = { id: area.id, kind: area.kind, distanceM };
+    const gainDbi =
+      input.gainTowardDbi && input.centre ? input.gainTowardDbi(closestPointOnShape(input.centre, area.shape)) : input.gainDbi;
+    const requiredM =
+      gainDbi === input.gainDbi ? uM : exposureDistances({ ...input, gainDbi }).distanceM.uncontrolled;
+    if (!nearest || distanceM - requiredM < nearest.distanceM - nearest.requiredM) {
+      nearest = { id: area.id, kind: area.kind, distanceM, requiredM, gainDbi };
+    }
   }
   const rule = 'the public stays outside the uncontrolled-exposure distance from the wire';
   if (!nearest) {
@@ -63,18 +73,20 @@ export function exposureCheck(input: ExposureCheckInput): ExposureResult {
       caution: SAFETY_CAUTION,
     });
   } else {
-    const inside = nearest.distanceM < uM;
+    const inside = nearest.distanceM < nearest.requiredM;
+    const toward =
+      nearest.gainDbi === input.gainDbi ? '' : `; ${nearest.gainDbi.toFixed(1)} dBi toward it, ${fmtM(uM)} at peak gain`;
     results.push({
       key: 'rf-exposure:public',
       kind: 'rf-exposure',
       level: inside ? 'needs-review' : 'clear',
       distanceM: nearest.distanceM,
-      requiredM: uM,
+      requiredM: nearest.requiredM,
       rule,
       source: SOURCE,
       message: inside
-        ? `${nearest.kind} ${nearest.id} is ${fmtM(nearest.distanceM)} from the wire, inside the public distance ${fmtM(uM)} (${basis}): rope off or reduce power.`
-        : `Nearest public area (${nearest.kind} ${nearest.id}) is ${fmtM(nearest.distanceM)} from the wire, outside the public distance ${fmtM(uM)} (${basis}).`,
+        ? `${nearest.kind} ${nearest.id} is ${fmtM(nearest.distanceM)} from the wire, inside the public distance ${fmtM(nearest.requiredM)} (${basis}${toward}): rope off or reduce power.`
+        : `The closest public area to its limit (${nearest.kind} ${nearest.id}) is ${fmtM(nearest.distanceM)} from the wire, outside the public distance ${fmtM(nearest.requiredM)} (${basis}${toward}).`,
       caution: SAFETY_CAUTION,
     });
   }
