@@ -2,6 +2,7 @@
 import { pino, type Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config';
+import type { EnqueueOptions } from './modules/mail/mail-queue';
 
 export interface MailMessage {
   to: string;
@@ -10,9 +11,13 @@ export interface MailMessage {
   html: string;
 }
 
-/** Queues an e-mail for the mail worker; resolves once the message is safely queued (not when it is sent). */
+/**
+ * Queues an e-mail for the mail worker; resolves once the message is safely queued (not when it is sent).
+ * The real one is the pg-boss outbox (modules/mail/mail-service.ts); with `options.manager` it inserts the job in
+ * that transaction, so a row and its e-mail commit together. A test double may ignore the options.
+ */
 export interface MailQueue {
-  enqueue(message: MailMessage): Promise<void>;
+  enqueue(message: MailMessage, options?: EnqueueOptions): Promise<void>;
 }
 
 export interface Clock {
