@@ -3,3 +3,4 @@ export * from './clock-rules';
 export * from './versions';
 export * from './messages';
 export * from './field-rules';
+export * from './transport';

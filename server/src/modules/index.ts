@@ -12,6 +12,7 @@ import { devMailboxRouter } from './mail/dev-mailbox-router';
 import { membersRouter } from './members/router';
 import { photosRouter } from './photos/router';
 import { sitesRouter } from './sites/router';
+import { syncRouter } from './sync/router';
 
 export interface Module {
   /** Path under /api ('' mounts the router's own paths directly under /api). */
@@ -30,4 +31,5 @@ export const MODULES: Module[] = [
   { mount: '/clubs/:clubId/sites', router: sitesRouter },
   { mount: '/clubs/:clubId/events', router: eventsRouter },
   { mount: '/dev/mailbox', router: devMailboxRouter },
+  { mount: '/clubs/:clubId/sync', router: syncRouter },
 ];

@@ -2,5 +2,6 @@
 // its class here (classes, not globs: TypeORM's glob loading does not work under tsx).
 import { InitialSchema1796163364737 } from './1796163364737-initial-schema';
 import { PhotoUploads1796163535135 } from './1796163535135-photo-uploads';
+import { SyncBookkeeping1796170000000 } from './1796170000000-sync-bookkeeping';
 
-export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135];
+export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135, SyncBookkeeping1796170000000];
