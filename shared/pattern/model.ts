@@ -1,6 +1,7 @@
 import { complexPermittivity, csqrt, wavelengthM } from '../ground';
 import { dipoleGeometry, type Leg } from './geometry';
 import { defaultOrders, dipoleImpedances, ETA0_OHM, mirrorLeg } from './induced-emf';
+import { dipoleImpedancesFast } from './leg-field';
 import type { DipoleInput } from './types';
 
 /*
@@ -43,7 +44,12 @@ export function normalReflection(epsRe: number, epsIm: number): [number, number]
   return [(nr * dr + ni * di) / d, (ni * dr - nr * di) / d];
 }
 
-export function prepareDipole(input: DipoleInput, quadratureScale = 1): PreparedDipole {
+/**
+ * `method`: 'closed-form' (default) integrates the closed-form leg fields along the wire (one integral);
+ * 'double-integral' evaluates the mixed-potential reaction integral directly (independent, slower; the
+ * reference implementation uses it to check the fast path).
+ */
+export function prepareDipole(input: DipoleInput, quadratureScale = 1, method: 'closed-form' | 'double-integral' = 'closed-form'): PreparedDipole {
   const g = dipoleGeometry(input);
   const lambdaM = wavelengthM(input.freqMhz);
   const k = (2 * Math.PI) / lambdaM;
@@ -51,7 +57,10 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1): Prepared
   const kind = input.ground.kind;
   const [l1, l2] = g.legs;
   const symmetric = Math.abs(l1.tx + l2.tx) < 1e-12 && Math.abs(l1.tz - l2.tz) < 1e-12;
-  const z = dipoleImpedances(g.legs, k, H, g.radiusM, kind !== 'free-space', defaultOrders(k, H, quadratureScale), symmetric);
+  const z =
+    method === 'closed-form'
+      ? dipoleImpedancesFast(g.legs, k, H, g.radiusM, kind !== 'free-space', symmetric, quadratureScale)
+      : dipoleImpedances(g.legs, k, H, g.radiusM, kind !== 'free-space', defaultOrders(k, H, quadratureScale), symmetric);
   let epsRe = 1, epsIm = 0;
   let rho: [number, number] = [0, 0];
   if (kind === 'perfect') rho = [1, 0];
@@ -97,18 +106,16 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1): Prepared
 let accRe = 0;
 let accIm = 0;
 
-/** Adds leg ∫ into (accRe, accIm) for phase factor (e0r, e0i) = e^{jk r̂·p}; returns nothing (hot path). */
-function legIntegral(k: number, H: number, l: number, q: number, e0r: number, e0i: number, ekl: number, ekli: number): void {
-  const a1 = (k * (q - 1) * l) / 2;
-  const c1 = Math.cos(a1);
-  const s1 = Math.sin(a1);
-  const c2 = c1 * ekl - s1 * ekli;
-  const s2 = s1 * ekl + c1 * ekli;
-  const a2 = a1 + k * l;
+/**
+ * Leg integral into (accRe, accIm) for phase factor (e0r, e0i) = e^{jk r̂·p}, given c1 + j·s1 = e^{j·a1}.
+ * (ckh, skh) = e^{jkH} and (ckl, skl) = e^{jkℓ}; here ℓ = H. Hot path: scalars only.
+ */
+function legIntegral(kl: number, l: number, a1: number, c1: number, s1: number, e0r: number, e0i: number, ckh: number, skh: number): void {
+  const c2 = c1 * ckh - s1 * skh;
+  const s2 = s1 * ckh + c1 * skh;
+  const a2 = a1 + kl;
   const sc1 = Math.abs(a1) < 1e-7 ? 1 : s1 / a1;
   const sc2 = Math.abs(a2) < 1e-7 ? 1 : s2 / a2;
-  const ckh = Math.cos(k * H);
-  const skh = Math.sin(k * H);
   // e^{j(kH + a1)} and e^{j(−kH + a2)}
   const p1r = ckh * c1 - skh * s1;
   const p1i = skh * c1 + ckh * s1;
@@ -134,11 +141,16 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
   const [l1, l2] = m.legs;
   const ph0 = k * l1.pz * rz;
   const e0r = Math.cos(ph0), e0i = Math.sin(ph0);
-  const ekl = m.cosKL, ekli = m.sinKL;
+  const ckh = m.cosKL, skh = m.sinKL;
+  const l = H, kl = k * H, half = kl / 2;
+  // a1 = k(q − 1)ℓ/2 for each leg, q = r̂·t̂; a horizontal leg and its image share q
+  const a11 = half * (rx * l1.tx + rz * l1.tz - 1);
+  const a12 = half * (rx * l2.tx + rz * l2.tz - 1);
+  const c11 = Math.cos(a11), s11 = Math.sin(a11), c12 = Math.cos(a12), s12 = Math.sin(a12);
   // direct wire: N = Σ sign·t̂·∫
-  legIntegral(k, H, l1.lengthM, rx * l1.tx + rz * l1.tz, e0r, e0i, ekl, ekli);
+  legIntegral(kl, l, a11, c11, s11, e0r, e0i, ckh, skh);
   let nxr = l1.tx * accRe, nxi = l1.tx * accIm, nzr = l1.tz * accRe, nzi = l1.tz * accIm;
-  legIntegral(k, H, l2.lengthM, rx * l2.tx + rz * l2.tz, e0r, e0i, ekl, ekli);
+  legIntegral(kl, l, a12, c12, s12, e0r, e0i, ckh, skh);
   nxr -= l2.tx * accRe; nxi -= l2.tx * accIm; nzr -= l2.tz * accRe; nzi -= l2.tz * accIm;
   // θ̂ = (sinΔ cosφ, ·, −cosΔ), φ̂ = (−sinφ, cosφ, 0); t_y = 0
   let tRe = nxr * sinE * cosA - nzr * cosE;
@@ -147,9 +159,19 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
   let pIm = -nxi * sinA;
   if (m.ground !== 'free-space') {
     // image: mirrored path (t_z → −t_z, p_z → −h) carrying −I
-    legIntegral(k, H, l1.lengthM, rx * l1.tx - rz * l1.tz, e0r, -e0i, ekl, ekli);
+    if (l1.tz === 0) {
+      legIntegral(kl, l, a11, c11, s11, e0r, -e0i, ckh, skh);
+    } else {
+      const b = half * (rx * l1.tx - rz * l1.tz - 1);
+      legIntegral(kl, l, b, Math.cos(b), Math.sin(b), e0r, -e0i, ckh, skh);
+    }
     let ixr = -l1.tx * accRe, ixi = -l1.tx * accIm, izr = l1.tz * accRe, izi = l1.tz * accIm;
-    legIntegral(k, H, l2.lengthM, rx * l2.tx - rz * l2.tz, e0r, -e0i, ekl, ekli);
+    if (l2.tz === 0) {
+      legIntegral(kl, l, a12, c12, s12, e0r, -e0i, ckh, skh);
+    } else {
+      const b = half * (rx * l2.tx - rz * l2.tz - 1);
+      legIntegral(kl, l, b, Math.cos(b), Math.sin(b), e0r, -e0i, ckh, skh);
+    }
     ixr += l2.tx * accRe; ixi += l2.tx * accIm; izr -= l2.tz * accRe; izi -= l2.tz * accIm;
     const itRe = ixr * sinE * cosA - izr * cosE;
     const itIm = ixi * sinE * cosA - izi * cosE;

@@ -64,7 +64,8 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
     if (val[n] > val[n - 1] + tol) lobes.push({ elevationDeg: 90, gainDbi: toDbi(val[n]), lin: val[n], idx: n });
   }
   let main = lobes[0];
-  for (const l of lobes) if (l.lin > main.lin) main = l;
+  // equal lobes (perfect ground, image theory) resolve to the lowest angle
+  for (const l of lobes) if (l.lin > main.lin * (1 + 1e-9)) main = l;
   const half = main.lin / 2;
   let lowDeg = 0;
   let highDeg = 90;
@@ -88,7 +89,7 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
     }
   }
   const windows = OPERATOR_WINDOWS.map((w) => ({ id: w.id, fromDeg: w.fromDeg, toDeg: w.toDeg, meanGainDbi: toDbi(windowMean(m, w.fromDeg, w.toDeg)) }));
-  const groundLossDb = m.ground === 'real' ? -10 * Math.log10(radiatedFraction(m)) : 0;
+  const groundLossDb = m.ground === 'real' ? -10 * Math.log10(radiatedFraction(m, 0.6)) : 0;
   return {
     peakGainDbi: main.gainDbi,
     takeoffDeg: main.elevationDeg,
