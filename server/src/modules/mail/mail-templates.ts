@@ -10,11 +10,13 @@ function trimSlash(url: string): string {
   return url.replace(/\/+$/, '');
 }
 
-/** "Tuesday 8 December 2026, 22:15 UTC": the expiry stated in UTC so nobody has to guess the time zone. */
+const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'];
+const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+const two = (n: number) => String(n).padStart(2, '0');
+
+/** "Tuesday 8 December 2026, 21:30 UTC": stated in UTC so nobody guesses the zone; built by hand, not by the ICU locale data. */
 export function formatExpiryUtc(at: Date): string {
-  const day = at.toLocaleDateString('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-  const time = at.toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit', hour12: false, timeZone: 'UTC' });
-  return `${day}, ${time} UTC`;
+  return `${WEEKDAYS[at.getUTCDay()]} ${at.getUTCDate()} ${MONTHS[at.getUTCMonth()]} ${at.getUTCFullYear()}, ${two(at.getUTCHours())}:${two(at.getUTCMinutes())} UTC`;
 }
 
 function html(paragraphs: string[], link: { href: string; label: string }): string {
