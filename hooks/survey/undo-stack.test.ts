@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { UNDO_DEPTH, applyUndo, combineUndo, popUndo, pushUndo, undoForCreate, undoForRemove, undoForUpdate, type UndoTarget } from './undo-stack';
+import { UNDO_DEPTH, applyUndo, changedFields, combineUndo, popUndo, pushUndo, undoForCreate, undoForRemove, undoForUpdate, type UndoTarget } from './undo-stack';
 
 function recorder(): UndoTarget & { calls: string[] } {
   const calls: string[] = [];
@@ -44,5 +44,12 @@ describe('survey undo stack (over the sync client’s update/remove/undelete)', 
     for (let i = 0; i < UNDO_DEPTH + 5; i++) stack = pushUndo(stack, undoForCreate(`n${i}`, 'supports', `x${i}`));
     expect(stack).toHaveLength(UNDO_DEPTH);
     expect(stack[stack.length - 1].label).toBe(`n${UNDO_DEPTH + 4}`);
+  });
+});
+
+describe('changedFields (an edit writes only what changed)', () => {
+  it('keeps changed fields and drops equal ones, comparing arrays by value', () => {
+    expect(changedFields({ a: 1, b: [1, 2], c: 'x' }, { a: 2, b: [1, 2], c: 'x', d: null })).toEqual({ a: 2 });
+    expect(changedFields({ a: null }, { a: 0 })).toEqual({ a: 0 });
   });
 });

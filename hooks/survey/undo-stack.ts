@@ -70,3 +70,12 @@ function sameValue(a: unknown, b: unknown): boolean {
   if (a === b) return true;
   return JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
 }
+
+/** Only the fields whose value differs: an edit writes just those, so it does not overwrite others' edits of the rest. */
+export function changedFields<T extends Record<string, unknown>>(before: Record<string, unknown>, after: T): Partial<T> {
+  const out: Partial<T> = {};
+  for (const key of Object.keys(after) as (keyof T & string)[]) {
+    if (!sameValue(before[key], after[key])) out[key] = after[key];
+  }
+  return out;
+}

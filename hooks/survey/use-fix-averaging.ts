@@ -1,0 +1,17 @@
+import { useEffect, useMemo, useState } from 'react';
+import { addReading, averaged, type AveragedFix, type Fix } from '@/components/survey/placement/placement-logic';
+import { surveyGeo } from '@/components/survey/placement/survey-geo';
+import type { PositionReading } from './use-position';
+
+/**
+ * Collects the position readings that arrive while `running`, and their accuracy-weighted average.
+ * Restarting clears them: a fix belongs to one place the scout stood.
+ */
+export function useFixAveraging(latest: PositionReading | null, running: boolean): { readings: Fix[]; fix: AveragedFix | null; restart: () => void } {
+  const [readings, setReadings] = useState<Fix[]>([]);
+  useEffect(() => {
+    if (running && latest) setReadings((rs) => addReading(rs, latest));
+  }, [latest, running]);
+  const fix = useMemo(() => averaged(readings, surveyGeo), [readings]);
+  return { readings, fix, restart: () => setReadings([]) };
+}

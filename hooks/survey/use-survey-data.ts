@@ -1,0 +1,36 @@
+import { useMemo } from 'react';
+import { useRecord, useRecords } from '@/hooks/sync';
+import type { Hazard, Measurement, OperatingPosition, Photo, Site, Support } from '@/shared/schemas';
+import { boundsOf } from '@/components/survey/plan/plan-transform';
+import { buildFeatures, featurePoints, type PlanFeature } from '@/components/survey/plan/plan-features';
+import { projector } from '@/components/survey/placement/survey-geo';
+
+export type SurveyData = {
+  site: Site | null;
+  supports: Support[];
+  hazards: Hazard[];
+  positions: OperatingPosition[];
+  measurements: Measurement[];
+  photos: Photo[];
+  features: PlanFeature[];
+  project: ((lat: number, lon: number) => { eastM: number; northM: number }) | null;
+  /** Largest extent of what has been recorded, metres: how the forms judge a fix "worse than the site". */
+  siteSpanM: number | null;
+};
+
+/** One site's survey, read from the phone's local store (live: updates as records change or sync in). */
+export function useSurveyData(siteId: string): SurveyData {
+  const site = useRecord('sites', siteId) as Site | null | undefined;
+  const onSite = <T extends { siteId: string; deletedAt: string | null }>(xs: readonly T[] | undefined) => (xs ?? []).filter((x) => x.siteId === siteId && !x.deletedAt);
+  const supports = onSite(useRecords('supports') as Support[] | undefined);
+  const hazards = onSite(useRecords('hazards') as Hazard[] | undefined);
+  const positions = onSite(useRecords('operatingPositions') as OperatingPosition[] | undefined);
+  const measurements = onSite(useRecords('measurements') as Measurement[] | undefined);
+  const photos = onSite(useRecords('photos') as Photo[] | undefined);
+  const live = site && !site.deletedAt ? site : null;
+  const project = useMemo(() => (live ? projector({ lat: live.refLat, lon: live.refLon }) : null), [live?.refLat, live?.refLon]);
+  const features = useMemo(() => (project ? buildFeatures({ supports, hazards, operatingPositions: positions }, project) : []), [project, supports, hazards, positions]);
+  const b = boundsOf(featurePoints(features));
+  const siteSpanM = b && features.length >= 2 ? Math.max(b.maxEastM - b.minEastM, b.maxNorthM - b.minNorthM) : null;
+  return { site: live, supports, hazards, positions, measurements, photos, features, project, siteSpanM };
+}
