@@ -1,7 +1,7 @@
 // Starts one private PostgreSQL cluster for the whole server test run (under /tmp, on a free port), migrates a
 // template database once, and hands the connection details to the tests (inject('pg')). Each test app clones the
 // template (CREATE DATABASE … TEMPLATE), which takes a fraction of a second.
-import { mkdtempSync, rmSync } from 'node:fs';
+import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { TestProject } from 'vitest/node';
@@ -24,6 +24,7 @@ declare module 'vitest' {
 
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   const root = mkdtempSync(join(tmpdir(), 'loftline-test-pg-'));
+  chmodSync(root, 0o755); // mkdtemp makes it 0700; the postgres OS user must be able to enter it
   const cluster = await startCluster({ dataDir: join(root, 'data') });
   try {
     await cluster.ensureDatabase(TEMPLATE_DB);
@@ -39,6 +40,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   process.env.LOFTLINE_TEST_PG_URL = cluster.url('');
   return async () => {
     await cluster.stop();
+    rmSync(cluster.dataDir, { recursive: true, force: true });
     rmSync(root, { recursive: true, force: true });
   };
 }

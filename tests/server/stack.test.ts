@@ -1,6 +1,6 @@
 // startStack end to end: a private cluster in the data folder, migrations, the demo scenario on first start only,
 // and a second start on the same folder that keeps everything (issue 2: "a second start reuses the data").
-import { mkdtempSync, rmSync } from 'node:fs';
+import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
@@ -8,6 +8,7 @@ import { DEMO_CLUB, DEMO_EVENT_NAME, DEMO_PASSWORD, DEMO_USERS } from '../../ser
 import { startStack, type Stack } from '../../server/src/dev/stack';
 
 const dataDir = mkdtempSync(join(tmpdir(), 'loftline-stack-test-'));
+chmodSync(dataDir, 0o755); // mkdtemp makes it 0700: the postgres OS user could not enter it
 const env = { LOG_LEVEL: 'silent' };
 let stack: Stack | null = null;
 
