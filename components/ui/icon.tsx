@@ -80,8 +80,8 @@ const paths: Record<IconName, (c: string) => React.ReactNode> = {
   trash: () => <Path d="M4 7h16M9 7V4h6v3M6 7l1 14h10l1-14M10 11v6M14 11v6" />,
   close: () => <Path d="M6 6l12 12M18 6L6 18" />,
   tree: () => <Path d="M12 22v-6M12 2l6 9h-3l4 5H5l4-5H6l6-9z" />,
-  // The mark: a line lofted over a high support, falling to a low one.
-  logo: () => <Path d="M3 21V9M21 21V14M3 9.5C8 9 14 12 21 14.5M7 21h-6" />,
+  // The mark: a wire lofted between a tall support and a shorter one, sagging between them.
+  logo: () => <Path d="M5 21V4M19 21V9M5 5Q12 13 19 10M2 21h20" />,
 };
 
 export function Icon({ name, size = 24, color = colors.ink, accessibilityLabel }: Props) {

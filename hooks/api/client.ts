@@ -57,6 +57,8 @@ async function refreshTokens(): Promise<boolean> {
 async function send(path: string, init: ApiInit): Promise<Response> {
   const { json, auth = true, headers, ...rest } = init;
   const h = new Headers(headers);
+  // Some routes (the dev mailbox) also answer HTML to a browser; the app always wants JSON.
+  if (!h.has('accept')) h.set('accept', 'application/json');
   if (json !== undefined) h.set('content-type', 'application/json');
   const tokens = tokenStore.get();
   if (auth && tokens) h.set('authorization', `Bearer ${tokens.accessToken}`);

@@ -1,5 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CollectionFields, StoredRecord } from '@/shared/schemas';
+import type { z } from 'zod';
+import type { COLLECTIONS, CollectionFields, StoredRecord } from '@/shared/schemas';
+
+/** What a create body may leave out: the fields the schema defaults. */
+type CreateFields<C extends RestCollection> = z.input<(typeof COLLECTIONS)[C]['fields']>;
 import { apiFetch } from './client';
 
 /*
@@ -30,7 +34,7 @@ export function useClubItem<C extends RestCollection>(collection: C, clubId: str
 export function useClubCreate<C extends RestCollection>(collection: C, clubId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (fields: CollectionFields<C> & { id?: string }) =>
+    mutationFn: (fields: CreateFields<C> & { id?: string }) =>
       apiFetch<StoredRecord<C>>(`/api/clubs/${clubId}/${collection}`, { method: 'POST', json: fields }),
     onSuccess: () => qc.invalidateQueries({ queryKey: listKey(collection, clubId) }),
   });

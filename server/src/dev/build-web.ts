@@ -1,14 +1,14 @@
 import { spawn } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { buildServiceWorker } from './build-service-worker';
 
 /*
  * Builds the web app with `expo export` into a folder the server can serve from the same origin.
  * Later steps (the service worker) extend buildWeb() after the export.
  */
 
-const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
+const repoRoot = path.resolve(__dirname, '../../..');
 
 export type BuildWebOptions = { outDir: string; quiet?: boolean };
 
@@ -34,6 +34,8 @@ export async function exportWeb({ outDir, quiet }: BuildWebOptions): Promise<voi
 export async function buildWeb(options: BuildWebOptions): Promise<{ outDir: string }> {
   const outDir = path.resolve(repoRoot, options.outDir);
   await exportWeb({ ...options, outDir });
+  // The service worker (H5b) precaches what the export wrote, so it must run last.
+  await buildServiceWorker(outDir);
   return { outDir };
 }
 
@@ -50,7 +52,7 @@ function parseArgs(argv: string[]): BuildWebOptions {
   return { outDir };
 }
 
-if (process.argv[1] && path.resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
+if (require.main === module) {
   let opts: BuildWebOptions;
   try {
     opts = parseArgs(process.argv.slice(2));

@@ -1,0 +1,2 @@
+import { MembersScreen } from '@/components/club/members-screen';
+export default MembersScreen;

@@ -1,0 +1,2 @@
+import { CreateClubScreen } from '@/components/club/create-club-screen';
+export default CreateClubScreen;

@@ -1,0 +1,2 @@
+import { EventsScreen } from '@/components/events/events-screen';
+export default EventsScreen;

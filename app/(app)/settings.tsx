@@ -1,0 +1,2 @@
+import { SettingsScreen } from '@/components/shell/settings-screen';
+export default SettingsScreen;

@@ -1,0 +1,2 @@
+import { SitesScreen } from '@/components/sites/sites-screen';
+export default SitesScreen;

@@ -1,0 +1,2 @@
+import { ForgotPasswordScreen } from '@/components/auth/forgot-password-screen';
+export default ForgotPasswordScreen;

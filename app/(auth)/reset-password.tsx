@@ -1,0 +1,2 @@
+import { ResetPasswordScreen } from '@/components/auth/reset-password-screen';
+export default ResetPasswordScreen;

@@ -1,0 +1,2 @@
+import { SignInScreen } from '@/components/auth/sign-in-screen';
+export default SignInScreen;

@@ -1,0 +1,2 @@
+import { SignUpScreen } from '@/components/auth/sign-up-screen';
+export default SignUpScreen;

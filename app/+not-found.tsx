@@ -1,0 +1,2 @@
+import { NotFoundScreen } from '@/components/shell/not-found-screen';
+export default NotFoundScreen;

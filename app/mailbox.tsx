@@ -1,0 +1,2 @@
+import { MailboxScreen } from '@/components/shell/mailbox-screen';
+export default MailboxScreen;
