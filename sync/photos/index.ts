@@ -8,4 +8,5 @@ export { httpPhotoApi, PhotoApiError, type PhotoApi, type PhotoRequest } from '.
 export { uploadPhoto, type UploadOutcome } from './photo-uploader';
 export { PhotoQueue, type PhotoQueueOptions, type PhotoQueueStatus } from './photo-queue';
 export { sha256Hex } from './sha256';
+export { loadPhotoBytes } from './photo-bytes';
 export type { NewPhoto, PhotoStore, QueuedPhoto, PhotoState } from './types';

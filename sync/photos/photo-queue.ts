@@ -45,6 +45,16 @@ export class PhotoQueue {
 
   constructor(private readonly o: PhotoQueueOptions) {}
 
+  get store(): PhotoStore {
+    return this.o.store;
+  }
+  get api(): PhotoApi {
+    return this.o.api;
+  }
+  get clubId(): string {
+    return this.o.clubId;
+  }
+
   private get now() {
     return this.o.now ?? Date.now;
   }
