@@ -55,7 +55,7 @@ export function faultyTransport(inner: SyncTransport, random: () => number, rate
   }
   async function wrap<Q extends PushRequest | PullRequest, A>(req: Q, send: (r: Q) => Promise<A>): Promise<A> {
     if (late.length > 0 && random() < self.rates.delay) await deliverLate(late.splice(Math.floor(random() * late.length), 1)[0]);
-    if (req.type === 'push' && random() < self.rates.delay) late.push(structuredClone(req));
+    if (req.type === 'push' && random() < self.rates.delay) late.push(structuredClone(req as PushRequest));
     if (random() < self.rates.dropRequest) {
       log.droppedRequests += 1;
       throw new TransportError('offline', 'simulated: request lost');

@@ -26,6 +26,8 @@ export interface DeviceSpec {
   beforeCommit?: BeforeCommitHook;
   pushBatch?: number;
   pullLimit?: number;
+  /** Wraps the store (e.g. to watch every local write for an oracle). */
+  wrapStore?: (s: LocalStore) => LocalStore;
 }
 
 export class SimDevice {
@@ -40,6 +42,7 @@ export class SimDevice {
     const s = this.spec;
     this.store =
       s.storage === 'idb' ? await openIdbStore({ name: `sim-${s.deviceId}`, beforeCommit: s.beforeCommit }) : createMemoryStore(this.memory, { beforeCommit: s.beforeCommit });
+    if (s.wrapStore) this.store = s.wrapStore(this.store);
     const fetchTransport = createFetchTransport({ baseUrl: s.baseUrl, clubId: s.clubId, getAccessToken: async () => s.token });
     this.client = await createSyncClient({
       store: this.store,

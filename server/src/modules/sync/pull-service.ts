@@ -1,6 +1,7 @@
 // Pull: the club's changes after a cursor, in change_seq order, a page at a time. change_seq becomes visible in
 // commit order (the trigger draws it under one advisory lock held to commit), so reading "change_seq > cursor"
 // in one statement never skips a row that commits later with a smaller number.
+import type { Pool } from 'pg';
 import type { DataSource } from 'typeorm';
 import type { WireRecord } from '../../../../sync/protocol';
 import { tableOf } from '../../db/synced-columns';
@@ -25,7 +26,9 @@ export async function pullChanges(dataSource: DataSource, clubId: string, cursor
     const highest = seq.is_called ? Number(seq.last_value) : 0;
     if (after > highest) return { type: 'resync-required', message: 'This device knows of changes the server does not have (the server was restored): it will reload the club’s data after sending its changes.' };
   }
-  const rows: { collection: CollectionName; j: Record<string, unknown> }[] = await dataSource.query(PULL_SQL, [clubId, after, limit + 1]);
+  // A named (prepared) statement: planning the eleven-way UNION costs more than running it on an index.
+  const pool = (dataSource.driver as unknown as { master: Pool }).master;
+  const { rows } = await pool.query<{ collection: CollectionName; j: Record<string, unknown> }>({ name: 'loftline_sync_pull', text: PULL_SQL, values: [clubId, after, limit + 1] });
   const page = rows.slice(0, limit).map((r) => toWire(rowFromJson(r.collection, r.j)));
   return { type: 'changes', changes: page, cursor: page.length > 0 ? page[page.length - 1].changeSeq : cursor, hasMore: rows.length > limit };
 }

@@ -13,7 +13,9 @@ export async function purgeTombstones(dataSource: DataSource, before: Date): Pro
     const counts = new Map<string, number>();
     const horizons = new Map<string, number>();
     for (const c of COLLECTION_NAMES) {
-      const gone: { club_id: string; change_seq: number }[] = await em.query(`DELETE FROM ${tableOf(c)} WHERE deleted_at IS NOT NULL AND deleted_at < $1 RETURNING club_id, change_seq`, [before.toISOString()]);
+      // TypeORM answers a DELETE … RETURNING as [rows, rowCount].
+      const result: unknown[] = await em.query(`DELETE FROM ${tableOf(c)} WHERE deleted_at IS NOT NULL AND deleted_at < $1 RETURNING club_id, change_seq`, [before.toISOString()]);
+      const gone = (Array.isArray(result[0]) ? result[0] : result) as { club_id: string; change_seq: number }[];
       for (const g of gone) {
         counts.set(g.club_id, (counts.get(g.club_id) ?? 0) + 1);
         horizons.set(g.club_id, Math.max(horizons.get(g.club_id) ?? 0, Number(g.change_seq)));
