@@ -27,6 +27,8 @@ export function createApp(deps: AppDeps, opts: AppOptions = {}): Express {
           'font-src': ["'self'", 'data:'],
           'worker-src': ["'self'"],
           'connect-src': ["'self'"],
+          // Off: a phone on the field's Wi-Fi opens http://<laptop-ip>:8080, and upgrading its requests to https breaks them.
+          'upgrade-insecure-requests': null,
         },
       },
     }),

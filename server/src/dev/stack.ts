@@ -110,3 +110,21 @@ export async function startStack(opts: StackOptions): Promise<Stack> {
     throw err;
   }
 }
+
+/** Resolves once SIGINT or SIGTERM arrived and `stop` finished (errors while stopping are reported, not thrown). */
+export function stopOnSignal(stop: () => Promise<void>, say: (line: string) => void = console.log): Promise<void> {
+  return new Promise<void>((done) => {
+    let stopping = false;
+    const onSignal = (signal: string) => {
+      if (stopping) return;
+      stopping = true;
+      say(`loftline: ${signal}: stopping…`);
+      stop().then(done, (err: unknown) => {
+        say(`loftline: error while stopping: ${err instanceof Error ? err.message : String(err)}`);
+        done();
+      });
+    };
+    process.once('SIGINT', () => onSignal('SIGINT'));
+    process.once('SIGTERM', () => onSignal('SIGTERM'));
+  });
+}

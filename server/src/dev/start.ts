@@ -4,7 +4,7 @@ import { existsSync, readdirSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { ConfigError, loadConfig } from '../config';
 import { DEMO_PASSWORD, DEMO_USERS } from './demo-scenario';
-import { startStack } from './stack';
+import { startStack, stopOnSignal } from './stack';
 
 const ROOT = resolve(__dirname, '../../..');
 const WEB_DIR = join(ROOT, 'dist');
@@ -78,20 +78,7 @@ async function main(): Promise<number> {
   ];
   console.log(lines.join('\n'));
 
-  await new Promise<void>((done) => {
-    let stopping = false;
-    const stop = (signal: string) => {
-      if (stopping) return;
-      stopping = true;
-      console.log(`\nloftline: ${signal}: stopping…`);
-      stack.stop().then(done, (err: unknown) => {
-        console.error('loftline: error while stopping', err);
-        done();
-      });
-    };
-    process.once('SIGINT', () => stop('SIGINT'));
-    process.once('SIGTERM', () => stop('SIGTERM'));
-  });
+  await stopOnSignal(() => stack.stop());
   console.log('loftline: stopped');
   return 0;
 }
