@@ -27,6 +27,17 @@ export function gridIntervals(m: PreparedDipole): number {
   return Math.max(16, Math.ceil((12 * m.input.heightM) / m.lambdaM) + 8);
 }
 
+/**
+ * The main lobe: the strongest, except that lobes within MAIN_LOBE_TIE_DB of the strongest count as equal and
+ * the lowest of them wins (over perfect ground every broadside lobe has the same gain: image theory).
+ */
+export const MAIN_LOBE_TIE_DB = 0.01;
+export function mainLobe<T extends { elevationDeg: number }>(lobes: T[], dbOf: (l: T) => number): T {
+  let best = -Infinity;
+  for (const l of lobes) best = Math.max(best, dbOf(l));
+  return lobes.find((l) => dbOf(l) >= best - MAIN_LOBE_TIE_DB) ?? lobes[0];
+}
+
 export function summarizePattern(input: DipoleInput): PatternSummary {
   return summarizePrepared(prepareDipole(input));
 }
@@ -63,9 +74,7 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
     }
     if (val[n] > val[n - 1] + tol) lobes.push({ elevationDeg: 90, gainDbi: toDbi(val[n]), lin: val[n], idx: n });
   }
-  let main = lobes[0];
-  // equal lobes (perfect ground, image theory) resolve to the lowest angle
-  for (const l of lobes) if (l.lin > main.lin * (1 + 1e-9)) main = l;
+  const main = mainLobe(lobes, (l) => l.gainDbi);
   const half = main.lin / 2;
   let lowDeg = 0;
   let highDeg = 90;

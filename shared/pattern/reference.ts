@@ -1,0 +1,99 @@
+import { DEG, toDbi } from './db';
+import { gainLinear, prepareDipole } from './model';
+import { mainLobe } from './summary';
+import { swr } from './swr';
+import type { DipoleInput, PatternSummary } from './types';
+import { OPERATOR_WINDOWS } from './windows';
+
+/*
+ * The straightforward reference the fast summary is checked against (tests and `npm run bench`):
+ * the gain on a full 1° hemisphere grid (elevation 0…90°, azimuth 0…359°, 32 760 directions), the summary
+ * read off the broadside column (parabolic interpolation of each lobe on the 1° samples, linear interpolation
+ * of the half-power crossings in dB, trapezoid window means), the ground loss from the whole grid, and the
+ * feed impedance from the independent double-integral induced-EMF code at 3× its quadrature order.
+ * Deliberately slow and simple; never used by the app.
+ */
+export function referenceSummary(input: DipoleInput): PatternSummary {
+  const m = prepareDipole(input, 3, 'double-integral');
+  const nE = 91;
+  const grid: Float64Array[] = [];
+  for (let i = 0; i < nE; i++) {
+    const row = new Float64Array(360);
+    const e = i * DEG;
+    const se = Math.sin(e), ce = Math.cos(e);
+    for (let j = 0; j < 360; j++) row[j] = gainLinear(m, se, ce, Math.sin(j * DEG), Math.cos(j * DEG));
+    grid.push(row);
+  }
+  const col = grid.map((r) => r[90]);
+  const db = col.map(toDbi);
+  const max = Math.max(...col), min = Math.min(...col);
+  const flat = max - min <= 1e-6 * max;
+  const lobes: { elevationDeg: number; gainDbi: number }[] = [];
+  const nulls: { elevationDeg: number }[] = [];
+  // the cut is symmetric about the zenith (geometry in the x–z plane), so sample 91° mirrors 89°
+  const at = (i: number) => (i > 90 ? db[180 - i] : db[i]);
+  const vertex = (i: number) => {
+    const a = at(i - 1), b = at(i), c = at(i + 1);
+    const den = a - 2 * b + c;
+    const d = den === 0 ? 0 : (0.5 * (a - c)) / den;
+    return { x: i + d, y: b - 0.25 * (a - c) * d };
+  };
+  if (flat) lobes.push({ elevationDeg: 0, gainDbi: db[0] });
+  else {
+    if (col[0] > col[1]) lobes.push({ elevationDeg: 0, gainDbi: db[0] });
+    for (let i = 1; i <= 90; i++) {
+      const next = i === 90 ? col[89] : col[i + 1];
+      if (col[i] >= col[i - 1] && col[i] > next) {
+        const v = vertex(i);
+        lobes.push({ elevationDeg: Math.min(90, v.x), gainDbi: v.y });
+      } else if (i < 90 && col[i] <= col[i - 1] && col[i] < next) nulls.push({ elevationDeg: vertex(i).x });
+    }
+  }
+  const main = mainLobe(lobes, (l) => l.gainDbi);
+  const halfDb = main.gainDbi + 10 * Math.log10(0.5);
+  let lowDeg = 0, highDeg = 90;
+  if (!flat) {
+    const p = Math.round(main.elevationDeg);
+    for (let i = Math.min(p, 90); i > 0; i--) {
+      if (db[i - 1] < halfDb && db[i] >= halfDb) {
+        lowDeg = i - 1 + (halfDb - db[i - 1]) / (db[i] - db[i - 1]);
+        break;
+      }
+    }
+    for (let i = Math.max(p, 0); i < 90; i++) {
+      if (db[i + 1] < halfDb && db[i] >= halfDb) {
+        highDeg = i + (db[i] - halfDb) / (db[i] - db[i + 1]);
+        break;
+      }
+    }
+  }
+  const windows = OPERATOR_WINDOWS.map((w) => {
+    let s = 0;
+    for (let i = w.fromDeg; i < w.toDeg; i++) s += (col[i] + col[i + 1]) / 2;
+    return { id: w.id, fromDeg: w.fromDeg, toDeg: w.toDeg, meanGainDbi: toDbi(s / (w.toDeg - w.fromDeg)) };
+  });
+  let groundLossDb = 0;
+  if (m.ground === 'real') {
+    // (1/4π) ∫∫ G cosΔ dΔ dφ, trapezoid in Δ, rectangle in φ (periodic)
+    let s = 0;
+    for (let i = 0; i < nE; i++) {
+      let row = 0;
+      for (let j = 0; j < 360; j++) row += grid[i][j];
+      const wgt = i === 0 || i === 90 ? 0.5 : 1;
+      s += wgt * row * Math.cos(i * DEG);
+    }
+    groundLossDb = -10 * Math.log10((s * DEG * DEG) / (4 * Math.PI));
+  }
+  return {
+    peakGainDbi: main.gainDbi,
+    takeoffDeg: main.elevationDeg,
+    halfPower: { lowDeg, highDeg },
+    lobes,
+    nulls,
+    windows,
+    feed: { ...m.feed },
+    swr50: swr(m.feed.resistanceOhm, m.feed.reactanceOhm, 50),
+    groundLossDb,
+    heightWavelengths: input.heightM / m.lambdaM,
+  };
+}
