@@ -10,3 +10,4 @@ export { PhotoQueue, type PhotoQueueOptions, type PhotoQueueStatus } from './pho
 export { sha256Hex } from './sha256';
 export { loadPhotoBytes } from './photo-bytes';
 export type { NewPhoto, PhotoStore, QueuedPhoto, PhotoState } from './types';
+export { browserTriggerEnv } from './triggers';
