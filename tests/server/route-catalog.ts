@@ -128,8 +128,8 @@ export const ROUTES: RouteSpec[] = [
 export const routeName = (r: RouteSpec) => `${r.method} ${r.path}`;
 
 /** The concrete URL of a route: :clubId from the context (or `clubId`), the other parameters from `params`. */
-export async function routeUrl(r: RouteSpec, ctx: RouteContext, clubId = ctx.clubId): Promise<string> {
-  const values = { clubId, ...(r.params ? await r.params(ctx) : {}) };
+export async function routeUrl(r: RouteSpec, ctx: RouteContext, clubId = ctx.clubId, overrides: Record<string, string> = {}): Promise<string> {
+  const values = { clubId, ...(r.params ? await r.params(ctx) : {}), ...overrides };
   return r.path.replace(/:(\w+)/g, (_, name: string) => {
     const v = (values as Record<string, string>)[name];
     if (v === undefined) throw new Error(`${routeName(r)}: no value for :${name}`);

@@ -72,10 +72,10 @@ export class RecordService<C extends RestCollection> {
   /** Changes only the fields sent; the merged record must still pass every rule (e.g. an event ends on or after it starts). */
   update(clubId: string, id: string, patch: Record<string, unknown>): Promise<StoredRecord<C>> {
     const changed = fieldsOrThrow(checkEditedFields(this.records.collection, patch));
+    if (Object.keys(changed).length === 0) throw new AppError('nothing_to_change', 'invalid', `send at least one field of the ${this.label} to change`);
     return this.dataSource.transaction(async (manager) => {
       const row = await this.records.find(manager, clubId, id, true);
       if (!row || row.deletedAt) throw this.notFound();
-      if (Object.keys(changed).length === 0) return toStored(row);
       const fieldNames = Object.keys(changed);
       const merged = { ...fieldsOf(toStored(row)), ...changed };
       const fields = fieldsOrThrow(checkNewRecordFields(this.records.collection, merged)) as CollectionFields<C>;
