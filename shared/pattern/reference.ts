@@ -7,9 +7,10 @@ import { OPERATOR_WINDOWS } from './windows';
 
 /*
  * The straightforward reference the fast summary is checked against (tests and `npm run bench`):
- * the gain on a full 1° hemisphere grid (elevation 0…90°, azimuth 0…359°, 32 760 directions), the summary
- * read off the broadside column (parabolic interpolation of each lobe on the 1° samples, linear interpolation
- * of the half-power crossings in dB, trapezoid window means), the ground loss from the whole grid, and the
+ * the gain on a full 1° hemisphere grid (elevation 0…90°, azimuth 0…359°, 32 760 directions) for the ground
+ * loss, the summary read off a brute broadside column at 0.1° (a 1° column alone is too coarse for the 3°-wide
+ * lobes of a 6 m wire at 5 λ: parabolic interpolation of each lobe, linear interpolation of the half-power
+ * crossings in dB, trapezoid window means), and the
  * feed impedance from the independent double-integral induced-EMF code at 3× its quadrature order.
  * Deliberately slow and simple; never used by the app.
  */
@@ -24,53 +25,60 @@ export function referenceSummary(input: DipoleInput): PatternSummary {
     for (let j = 0; j < 360; j++) row[j] = gainLinear(m, se, ce, Math.sin(j * DEG), Math.cos(j * DEG));
     grid.push(row);
   }
-  const col = grid.map((r) => r[90]);
+  const STEP = 0.1;
+  const nC = Math.round(90 / STEP);
+  const col: number[] = [];
+  for (let i = 0; i <= nC; i++) {
+    const e = i * STEP * DEG;
+    col.push(gainLinear(m, Math.sin(e), Math.cos(e), 1, 0));
+  }
   const db = col.map(toDbi);
   const max = Math.max(...col), min = Math.min(...col);
   const flat = max - min <= 1e-6 * max;
   const lobes: { elevationDeg: number; gainDbi: number }[] = [];
   const nulls: { elevationDeg: number }[] = [];
   // the cut is symmetric about the zenith (geometry in the x–z plane), so sample 91° mirrors 89°
-  const at = (i: number) => (i > 90 ? db[180 - i] : db[i]);
+  const at = (i: number) => (i > nC ? db[2 * nC - i] : db[i]);
   const vertex = (i: number) => {
     const a = at(i - 1), b = at(i), c = at(i + 1);
     const den = a - 2 * b + c;
     const d = den === 0 ? 0 : (0.5 * (a - c)) / den;
-    return { x: i + d, y: b - 0.25 * (a - c) * d };
+    return { x: (i + d) * STEP, y: b - 0.25 * (a - c) * d };
   };
   if (flat) lobes.push({ elevationDeg: 0, gainDbi: db[0] });
   else {
     if (col[0] > col[1]) lobes.push({ elevationDeg: 0, gainDbi: db[0] });
-    for (let i = 1; i <= 90; i++) {
-      const next = i === 90 ? col[89] : col[i + 1];
+    for (let i = 1; i <= nC; i++) {
+      const next = i === nC ? col[nC - 1] : col[i + 1];
       if (col[i] >= col[i - 1] && col[i] > next) {
         const v = vertex(i);
         lobes.push({ elevationDeg: Math.min(90, v.x), gainDbi: v.y });
-      } else if (i < 90 && col[i] <= col[i - 1] && col[i] < next) nulls.push({ elevationDeg: vertex(i).x });
+      } else if (i < nC && col[i] <= col[i - 1] && col[i] < next) nulls.push({ elevationDeg: vertex(i).x });
     }
   }
   const main = mainLobe(lobes, (l) => l.gainDbi);
   const halfDb = main.gainDbi + 10 * Math.log10(0.5);
   let lowDeg = 0, highDeg = 90;
   if (!flat) {
-    const p = Math.round(main.elevationDeg);
-    for (let i = Math.min(p, 90); i > 0; i--) {
+    const p = Math.round(main.elevationDeg / STEP);
+    for (let i = Math.min(p, nC); i > 0; i--) {
       if (db[i - 1] < halfDb && db[i] >= halfDb) {
-        lowDeg = i - 1 + (halfDb - db[i - 1]) / (db[i] - db[i - 1]);
+        lowDeg = (i - 1 + (halfDb - db[i - 1]) / (db[i] - db[i - 1])) * STEP;
         break;
       }
     }
-    for (let i = Math.max(p, 0); i < 90; i++) {
+    for (let i = Math.max(p, 0); i < nC; i++) {
       if (db[i + 1] < halfDb && db[i] >= halfDb) {
-        highDeg = i + (db[i] - halfDb) / (db[i] - db[i + 1]);
+        highDeg = (i + (db[i] - halfDb) / (db[i] - db[i + 1])) * STEP;
         break;
       }
     }
   }
   const windows = OPERATOR_WINDOWS.map((w) => {
     let s = 0;
-    for (let i = w.fromDeg; i < w.toDeg; i++) s += (col[i] + col[i + 1]) / 2;
-    return { id: w.id, fromDeg: w.fromDeg, toDeg: w.toDeg, meanGainDbi: toDbi(s / (w.toDeg - w.fromDeg)) };
+    const a = Math.round(w.fromDeg / STEP), b = Math.round(w.toDeg / STEP);
+    for (let i = a; i < b; i++) s += (col[i] + col[i + 1]) / 2;
+    return { id: w.id, fromDeg: w.fromDeg, toDeg: w.toDeg, meanGainDbi: toDbi(s / (b - a)) };
   });
   let groundLossDb = 0;
   if (m.ground === 'real') {

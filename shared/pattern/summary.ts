@@ -15,7 +15,7 @@ import { OPERATOR_WINDOWS } from './windows';
  * 1° hemisphere grid (shared/pattern/reference.ts).
  */
 
-const ANGLE_TOL_DEG = 1e-4;
+const ANGLE_TOL_DEG = 1e-3;
 
 export function broadsideGain(m: PreparedDipole, elevationDeg: number): number {
   const e = elevationDeg * DEG;
@@ -25,6 +25,23 @@ export function broadsideGain(m: PreparedDipole, elevationDeg: number): number {
 /** Number of grid intervals in sin Δ for the broadside cut. */
 export function gridIntervals(m: PreparedDipole): number {
   return Math.max(16, Math.ceil((12 * m.input.heightM) / m.lambdaM) + 8);
+}
+
+/** Largest angular gap allowed in the grid: near the zenith a uniform sin Δ grid is coarse in angle. */
+const MAX_GAP_DEG = 6;
+
+/** Grid angles 0…90°: uniform in sin Δ, with extra points wherever the gap in angle exceeds MAX_GAP_DEG. */
+export function gridAngles(m: PreparedDipole): number[] {
+  const n = gridIntervals(m);
+  const out: number[] = [0];
+  for (let i = 1; i <= n; i++) {
+    const next = i === n ? 90 : Math.asin(i / n) / DEG;
+    const prev = out[out.length - 1];
+    const parts = Math.ceil((next - prev) / MAX_GAP_DEG);
+    for (let j = 1; j < parts; j++) out.push(prev + ((next - prev) * j) / parts);
+    out.push(next);
+  }
+  return out;
 }
 
 /**
@@ -44,13 +61,13 @@ export function summarizePattern(input: DipoleInput): PatternSummary {
 
 export function summarizePrepared(m: PreparedDipole): PatternSummary {
   const g = (deg: number) => broadsideGain(m, deg);
-  const n = gridIntervals(m);
-  const deg = new Float64Array(n + 1);
+  const angles = gridAngles(m);
+  const n = angles.length - 1;
+  const deg = Float64Array.from(angles);
   const val = new Float64Array(n + 1);
   let gMax = 0;
   let gMin = Infinity;
   for (let i = 0; i <= n; i++) {
-    deg[i] = i === n ? 90 : Math.asin(i / n) / DEG;
     val[i] = g(deg[i]);
     if (val[i] > gMax) gMax = val[i];
     if (val[i] < gMin) gMin = val[i];
@@ -116,7 +133,7 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
 /** Mean linear broadside gain over elevations [fromDeg, toDeg], uniform in angle (Gauss–Legendre). */
 export function windowMean(m: PreparedDipole, fromDeg: number, toDeg: number): number {
   const du = Math.sin(toDeg * DEG) - Math.sin(fromDeg * DEG);
-  const rule = gaussLegendre(8 + Math.ceil((8 * du * m.input.heightM) / m.lambdaM));
+  const rule = gaussLegendre(6 + Math.ceil((8 * du * m.input.heightM) / m.lambdaM));
   const h = (toDeg - fromDeg) / 2;
   const c = (toDeg + fromDeg) / 2;
   let s = 0;
