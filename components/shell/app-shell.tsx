@@ -52,7 +52,8 @@ function ShellFrame({ children }: { children: React.ReactNode }) {
       </View>
     );
   }
-  if (me.isError) {
+  // A failed refresh with a kept answer (offline) is not an error worth a screen: carry on with what is known.
+  if (me.isError && !me.data) {
     return (
       <Screen title="Loftline" narrow>
         <ErrorText boxed message={errorMessage(me.error)} testID="shell-error" />
