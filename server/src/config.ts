@@ -16,12 +16,15 @@ export const envSchema = z
     DATABASE_URL: z.preprocess(blankToUndefined, z.url({ message: 'DATABASE_URL must be a postgres:// URL' }).optional()),
     APP_URL: z.preprocess(blankToUndefined, z.url({ message: 'APP_URL must be a URL such as http://127.0.0.1:8080' }).optional()),
     JWT_SECRET: z.preprocess(blankToUndefined, z.string().min(32, 'JWT_SECRET must be at least 32 characters').optional()),
-    MAIL_TRANSPORT: z.enum(['fake', 'smtp'], { message: 'MAIL_TRANSPORT must be fake or smtp' }).default('fake'),
+    // Unset: SMTP when SMTP_HOST is given, else the fake mailbox.
+    MAIL_TRANSPORT: z.preprocess(blankToUndefined, z.enum(['fake', 'smtp'], { message: 'MAIL_TRANSPORT must be fake or smtp' }).optional()),
     SMTP_HOST: z.preprocess(blankToUndefined, z.string().optional()),
     SMTP_PORT: z.preprocess(blankToUndefined, port('SMTP_PORT').default(587)),
     SMTP_USER: z.preprocess(blankToUndefined, z.string().optional()),
     SMTP_PASS: z.preprocess(blankToUndefined, z.string().optional()),
     SMTP_FROM: z.preprocess(blankToUndefined, z.string().default('Loftline <loftline@localhost>')),
+    /** TLS from the first byte (port 465); unset: true on port 465, else STARTTLS when the server offers it. */
+    SMTP_SECURE: z.preprocess(blankToUndefined, z.enum(['true', 'false'], { message: 'SMTP_SECURE must be true or false' }).optional()),
     LOG_LEVEL: z.enum(LOG_LEVELS, { message: `LOG_LEVEL must be one of ${LOG_LEVELS.join(', ')}` }).default('info'),
     AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
     AUTH_RATE_LIMIT_PER_IP: z.coerce.number().int().min(1).default(50),
@@ -45,7 +48,7 @@ export interface Config {
   mail: {
     transport: 'fake' | 'smtp';
     from: string;
-    smtp?: { host: string; port: number; user?: string; pass?: string };
+    smtp?: { host: string; port: number; user?: string; pass?: string; secure?: boolean };
   };
   logLevel: (typeof LOG_LEVELS)[number];
   /**
@@ -94,9 +97,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, secret: (dataDi
     passwordResetTtlS: 3600,
     invitationTtlS: 7 * 24 * 3600,
     mail: {
-      transport: e.MAIL_TRANSPORT,
+      transport: e.MAIL_TRANSPORT ?? (e.SMTP_HOST ? 'smtp' : 'fake'),
       from: e.SMTP_FROM,
-      smtp: e.SMTP_HOST ? { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, pass: e.SMTP_PASS } : undefined,
+      smtp: e.SMTP_HOST
+        ? { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, pass: e.SMTP_PASS, secure: e.SMTP_SECURE === undefined ? undefined : e.SMTP_SECURE === 'true' }
+        : undefined,
     },
     logLevel: e.LOG_LEVEL,
     authRateLimit: { max: e.AUTH_RATE_LIMIT, ipMax: e.AUTH_RATE_LIMIT_PER_IP, windowMs: 15 * 60 * 1000 },

@@ -7,7 +7,8 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { FileMailbox } from '../../server/src/modules/mail/file-mailbox';
 import { storedMailSchema } from '../../server/src/modules/mail/mail-message';
-import { mailboxDir } from '../../server/src/modules/mail/mail-settings';
+import { loadConfig } from '../../server/src/config';
+import { mailboxDir, mailSettingsFromConfig } from '../../server/src/modules/mail/mail-settings';
 import { invitationMail, passwordResetMail } from '../../server/src/modules/mail/mail-templates';
 import { createMailer } from '../../server/src/modules/mail/mail-transport';
 import { startTestApp } from './helpers/test-app';
@@ -118,5 +119,32 @@ describe('dev mailbox routes', () => {
     } finally {
       await t.close();
     }
+  });
+});
+
+describe('mail settings from the environment', () => {
+  const settings = (env: Record<string, string>) => mailSettingsFromConfig(loadConfig({ DATA_DIR: '/tmp/loftline-mail-env', ...env }, () => 'x'.repeat(40)));
+
+  it('no SMTP_HOST: the fake mailbox in ${DATA_DIR}/mailbox', () => {
+    expect(settings({})).toEqual({ transport: 'fake', from: expect.any(String), mailboxDir: '/tmp/loftline-mail-env/mailbox' });
+  });
+
+  it('SMTP_HOST alone switches to SMTP (port 587, STARTTLS when offered, no auth)', () => {
+    expect(settings({ SMTP_HOST: 'mail.example.test', SMTP_FROM: 'Club <club@example.test>' })).toEqual({
+      transport: 'smtp',
+      from: 'Club <club@example.test>',
+      smtp: { host: 'mail.example.test', port: 587, secure: false, auth: null },
+    });
+  });
+
+  it('port 465 means TLS from the first byte unless SMTP_SECURE says otherwise; user and password become auth', () => {
+    expect(settings({ SMTP_HOST: 'm.test', SMTP_PORT: '465', SMTP_USER: 'u', SMTP_PASS: 'p' })).toMatchObject({ smtp: { port: 465, secure: true, auth: { user: 'u', pass: 'p' } } });
+    expect(settings({ SMTP_HOST: 'm.test', SMTP_PORT: '465', SMTP_SECURE: 'false' })).toMatchObject({ smtp: { secure: false } });
+    expect(settings({ SMTP_HOST: 'm.test', SMTP_PORT: '2525', SMTP_SECURE: 'true' })).toMatchObject({ smtp: { port: 2525, secure: true } });
+  });
+
+  it('MAIL_TRANSPORT=fake keeps the fake mailbox even with SMTP_HOST set; a bad SMTP_SECURE stops the start', () => {
+    expect(settings({ SMTP_HOST: 'm.test', MAIL_TRANSPORT: 'fake' }).transport).toBe('fake');
+    expect(() => settings({ SMTP_HOST: 'm.test', SMTP_SECURE: 'maybe' })).toThrow(/SMTP_SECURE must be true or false/);
   });
 });

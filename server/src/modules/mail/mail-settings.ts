@@ -24,7 +24,7 @@ export function mailboxDir(dataDir: string): string {
   return path.join(dataDir, 'mailbox');
 }
 
-type MailConfig = Config['mail'] & { smtp?: { secure?: boolean } };
+type MailConfig = Config['mail'];
 
 export function mailSettingsFromConfig(config: { dataDir: string; mail: MailConfig }): MailSettings {
   const { mail } = config;
