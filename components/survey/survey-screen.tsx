@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View, useWindowDimensions } from 'react-native';
 import { Button, EmptyState, Txt } from '@/components/ui';
 import { colors, radii, spacing } from '@/constants/theme';
@@ -44,6 +44,12 @@ function SurveyBody({ siteId }: { siteId: string }) {
   const { role } = useCurrentClub();
   // Offline after a reload the role may not be known yet: the server still checks every change it receives.
   const canWrite = role === null || can(role, 'survey.write');
+
+  // Opening a form or a record starts it from its top (on a phone the plan stays in view above it).
+  const scroller = useRef<ScrollView>(null);
+  useEffect(() => {
+    scroller.current?.scrollTo({ y: 0, animated: false });
+  }, [panel]);
 
   const selected: FeatureRef | null = panel.type === 'detail' || panel.type === 'edit' ? panel.ref : null;
   const open = useCallback((ref: FeatureRef | null) => setPanel(ref ? { type: 'detail', ref } : { type: 'list' }), []);
@@ -131,7 +137,7 @@ function SurveyBody({ siteId }: { siteId: string }) {
     return (
       <View style={[styles.fill, styles.wideRow]} testID="survey-screen">
         <View style={styles.widePlan}>{head}{plan(planHeight)}</View>
-        <ScrollView style={styles.wideSide} contentContainerStyle={styles.sideContent} keyboardShouldPersistTaps="handled">
+        <ScrollView ref={scroller} style={styles.wideSide} contentContainerStyle={styles.sideContent} keyboardShouldPersistTaps="handled">
           {noticeBar}
           {panelBody}
           {caution}
@@ -141,7 +147,7 @@ function SurveyBody({ siteId }: { siteId: string }) {
   }
   const listing = panel.type === 'list' || panel.type === 'detail';
   return (
-    <ScrollView style={styles.fill} contentContainerStyle={styles.phoneContent} keyboardShouldPersistTaps="handled" testID="survey-screen">
+    <ScrollView ref={scroller} style={styles.fill} contentContainerStyle={styles.phoneContent} keyboardShouldPersistTaps="handled" testID="survey-screen">
       {head}
       {noticeBar}
       {plan(listing ? 320 : 240)}

@@ -59,7 +59,7 @@ export function PlacementPicker({ position, value, onChange, testID, what, error
         <View style={styles.fixText}>
           <Txt variant="label">{mode === 'here' ? 'GPS fix, averaged' : 'Where you stand'}</Txt>
           <Tabular testID={`${testID}-fix-status`}>
-            {fix ? `${fix.count} readings · ±${formatLengthM(fix.accuracyM)}` : position.status === 'starting' ? 'Waiting for the first reading…' : 'No readings yet'}
+            {fix ? `${fix.count} ${fix.count === 1 ? 'reading' : 'readings'} · ±${formatLengthM(fix.accuracyM)}` : position.status === 'starting' ? 'Waiting for the first reading…' : 'No readings yet'}
           </Tabular>
           <Txt variant="caption" color={colors.inkMuted}>
             {running ? (enough ? 'Keep still: more readings make it better. Use it when the accuracy stops improving.' : `Hold still for at least ${MIN_READINGS} readings…`) : 'Fix taken.'}

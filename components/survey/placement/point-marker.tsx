@@ -31,7 +31,7 @@ export function PointMarker({ position, points, onPoints, testID, noun }: { posi
           <Button label="Remove" testID={`${testID}-remove-${i}`} variant="quiet" compact onPress={() => onPoints(points.filter((_, j) => j !== i))} />
         </View>
       ))}
-      <Tabular testID={`${testID}-fix-status`}>{fix ? `Here: ${fix.count} readings · ±${formatLengthM(fix.accuracyM)}` : position.message ?? 'Waiting for a GPS reading…'}</Tabular>
+      <Tabular testID={`${testID}-fix-status`}>{fix ? `Here: ${fix.count} ${fix.count === 1 ? 'reading' : 'readings'} · ±${formatLengthM(fix.accuracyM)}` : position.message ?? 'Waiting for a GPS reading…'}</Tabular>
       {byOffset ? (
         <View>
           <TextField label={`Distance to the ${noun}`} testID={`${testID}-distance`} suffix={lengthUnit} inputMode="decimal" value={distanceText} onChangeText={setDistance} error={distanceText && !offset.ok ? offset.errors.distance : undefined} />

@@ -6,7 +6,8 @@ import { colors, fonts, radii, spacing } from '@/constants/theme';
 import { usePlanGestures } from '@/hooks/survey/use-plan-gestures';
 import { useUnits } from '@/hooks/use-units';
 import { featurePoints, featureRef, hitTest, type FeatureRef, type PlanFeature } from './plan-features';
-import { HazardSymbol, PointSymbol } from './plan-symbols';
+import { HazardSymbol, POINT_LABEL_DY, PointSymbol, hazardLabelDy, hazardLabelText, midpoint } from './plan-symbols';
+import { placeLabels, type LabelCandidate } from './label-placement';
 import { planColors } from './plan-style';
 import { boundsOf, fitToContent, screenToWorld, worldToScreen, zoomAbout, type PlanView, type WorldPoint } from './plan-transform';
 import { niceFloor, scaleBar } from './scale-bar';
@@ -48,6 +49,19 @@ export function SitePlan({ features, me, selected, onSelect, draft, height, test
 
   const onLayout = (e: LayoutChangeEvent) => setSize({ widthPx: Math.round(e.nativeEvent.layout.width), heightPx: Math.round(e.nativeEvent.layout.height) });
   const counts = countsOf(features);
+  const shownLabels = useMemo(() => {
+    if (!view) return new Set<string>();
+    const cands: LabelCandidate[] = features.map((f) => {
+      const sel = selected?.id === f.id ? 100 : 0;
+      if (f.type === 'hazard') {
+        const mid = midpoint(f.points.map((p) => worldToScreen(view, size, p))) ?? { x: -1e4, y: -1e4 };
+        return { id: f.id, x: mid.x, y: mid.y + hazardLabelDy(f), text: hazardLabelText(f), priority: sel + (f.kind === 'power-line' ? 5 : 1) };
+      }
+      const at = worldToScreen(view, size, f.at);
+      return { id: f.id, x: at.x, y: at.y + POINT_LABEL_DY, text: f.label, priority: sel + 2 };
+    });
+    return placeLabels(cands, size.widthPx, size.heightPx);
+  }, [features, view, size, selected]);
 
   return (
     <View style={[styles.wrap, { height }]}>
@@ -67,12 +81,12 @@ export function SitePlan({ features, me, selected, onSelect, draft, height, test
             <RefMark at={worldToScreen(view, size, { eastM: 0, northM: 0 })} />
             {features.map((f) => {
               const isSel = !!selected && selected.id === f.id;
-              if (f.type === 'hazard') return <HazardSymbol key={f.id} feature={f} points={f.points.map((p) => worldToScreen(view, size, p))} selected={isSel} />;
+              if (f.type === 'hazard') return <HazardSymbol key={f.id} feature={f} points={f.points.map((p) => worldToScreen(view, size, p))} selected={isSel} showLabel={shownLabels.has(f.id)} />;
               return null;
             })}
             {draft && draft.length > 0 ? <Draft points={draft.map((p) => worldToScreen(view, size, p))} /> : null}
             {me ? <Me at={worldToScreen(view, size, me.at)} radiusPx={(me.accuracyM ?? 0) * view.pxPerM} /> : null}
-            {features.map((f) => (f.type === 'hazard' ? null : <PointSymbol key={f.id} feature={f} at={worldToScreen(view, size, f.at)} selected={!!selected && selected.id === f.id} />))}
+            {features.map((f) => (f.type === 'hazard' ? null : <PointSymbol key={f.id} feature={f} at={worldToScreen(view, size, f.at)} selected={!!selected && selected.id === f.id} showLabel={shownLabels.has(f.id)} />))}
             <NorthArrow x={size.widthPx - 30} y={34} />
             <ScaleBarMark view={view} heightPx={size.heightPx} system={system} />
           </Svg>
@@ -157,7 +171,7 @@ function ScaleBarMark({ view, heightPx, system }: { view: PlanView; heightPx: nu
   const x = 14, y = heightPx - 18;
   return (
     <G>
-      <Rect x={x - 6} y={y - 24} width={bar.px + 12 + 8 * bar.label.length} height={34} rx={6} fill={planColors.halo} opacity={0.9} />
+      <Rect x={x - 6} y={y - 24} width={bar.px + 20 + 9.5 * bar.label.length} height={34} rx={6} fill={planColors.halo} opacity={0.9} />
       <Line x1={x} y1={y} x2={x + bar.px} y2={y} stroke={colors.ink} strokeWidth={3} />
       <Line x1={x} y1={y - 7} x2={x} y2={y + 4} stroke={colors.ink} strokeWidth={2} />
       <Line x1={x + bar.px} y1={y - 7} x2={x + bar.px} y2={y + 4} stroke={colors.ink} strokeWidth={2} />
@@ -169,5 +183,5 @@ function ScaleBarMark({ view, heightPx, system }: { view: PlanView; heightPx: nu
 const styles = StyleSheet.create({
   wrap: { borderRadius: radii.l, overflow: 'hidden', borderWidth: 2, borderColor: colors.line, backgroundColor: planColors.ground },
   canvas: { flex: 1, touchAction: 'none', cursor: 'grab' } as object,
-  tools: { position: 'absolute', right: spacing.s, bottom: spacing.s, flexDirection: 'column', gap: spacing.xs },
+  tools: { position: 'absolute', left: spacing.s, top: spacing.s, flexDirection: 'row', gap: spacing.xs },
 });

@@ -82,7 +82,7 @@ export function RecordDetail({ siteId, target, record, measurements, canEdit, on
           ))}
         </View>
       ) : null}
-      <Txt variant="label" style={{ marginTop: spacing.m }}>Photos</Txt>
+      <View style={{ height: spacing.s }} />
       <PhotoStrip siteId={siteId} subjectCollection={target.collection} subjectId={record.id} />
       <View style={styles.actions}>
         {canEdit ? <Button label="Edit" icon="pencil" testID="record-edit" onPress={onEdit} style={styles.grow} /> : null}
