@@ -65,7 +65,7 @@ export function GroundForm({ site, onDone }: { site: Site; onDone: () => void })
           <TextField label="Where the values come from" testID="ground-expert-words" value={expertWords} onChangeText={setExpertWords} hint="A probe measurement, a survey map…" />
         </>
       )}
-      <FormFooter testID="ground" questions={[]} saveError={saveError} canSave={!!fields && !busy} busy={busy} onSave={save} onCancel={onDone} />
+      <FormFooter testID="ground" questions={[]} blockers={mode === 'words' ? (choice ? [] : ['Pick the words that fit the ground best']) : expert.ok ? [] : Object.values(expert.errors)} saveError={saveError} canSave={!!fields && !busy} busy={busy} onSave={save} onCancel={onDone} />
     </View>
   );
 }

@@ -59,7 +59,7 @@ export function HazardForm({ siteId, position, existing, kind = 'power-line', on
         </>
       ) : null}
       <TextField label="Notes" testID="hazard-notes" multiline value={draft.notes} onChangeText={set('notes')} error={check.errors.notes} />
-      <FormFooter testID="hazard" questions={check.questions} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={() => { onDraftPoints?.([]); onDone(null); }} />
+      <FormFooter testID="hazard" questions={check.questions} blockers={Object.values(check.errors)} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={() => { onDraftPoints?.([]); onDone(null); }} />
     </View>
   );
 }

@@ -39,7 +39,7 @@ export function PositionForm({ siteId, position, existing, onDone }: { siteId: s
         <View style={{ marginBottom: spacing.l }}><Button label="Move it" testID="position-move" variant="secondary" compact onPress={() => setMoving(true)} /></View>
       )}
       <TextField label="Notes" testID="position-notes" multiline value={notes} onChangeText={setNotes} error={check.errors.notes} hint="Flat ground? Shade? Room for the generator downwind?" />
-      <FormFooter testID="position" questions={check.questions} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={() => onDone(null)} />
+      <FormFooter testID="position" questions={check.questions} blockers={Object.values(check.errors)} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={() => onDone(null)} />
     </View>
   );
 }

@@ -8,7 +8,7 @@ export type PositionDraft = { label: string; lat: number | null; lon: number | n
 
 export function checkPosition(draft: PositionDraft, siteId: string): FormCheck<PositionFields> {
   const errors: Record<string, string> = {};
-  if (draft.lat === null || draft.lon === null) errors.lat = 'Place it: use where you stand, or give distance and bearing';
+  if (draft.lat === null || draft.lon === null) errors.lat = errors.lon = 'Place it: use where you stand, or give distance and bearing';
   return checkWith(operatingPositionFieldsSchema, { siteId, label: draft.label, lat: draft.lat ?? Number.NaN, lon: draft.lon ?? Number.NaN, notes: draft.notes }, errors, []);
 }
 

@@ -26,7 +26,7 @@ export function SiteNotesForm({ site, onDone }: { site: Site; onDone: () => void
       <TextField label="Rules and permissions" testID="site-rules" multiline value={draft.rules} onChangeText={set('rules')} error={check.errors.rules} hint="One per line: “No stakes”, “No launchers after 18:00”, “Permit from the parks office”" />
       {check.reminders.map((r) => <Txt key={r} color={colors.info} variant="bodyStrong" style={{ marginBottom: spacing.xs }}>ℹ {r}</Txt>)}
       <TextField label="Other notes" testID="site-notes" multiline value={draft.notes} onChangeText={set('notes')} error={check.errors.notes} />
-      <FormFooter testID="site-notes" questions={[]} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={onDone} />
+      <FormFooter testID="site-notes" questions={[]} blockers={Object.values(check.errors)} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={onDone} />
     </View>
   );
 }

@@ -56,7 +56,7 @@ export function checkSupport(draft: SupportDraft, siteId: string, toM: (v: numbe
   const heightM = lengthOrError(draft.heightText, toM, 'height', errors, 'heightM');
   const attachHeightM = lengthOrError(draft.attachHeightText, toM, 'attachment height', errors, 'attachHeightM');
   const maxEnds = parseDecimal(draft.maxEndsText);
-  if (draft.lat === null || draft.lon === null) errors.lat = 'Place the support: take a GPS fix here, or give distance and bearing from where you stand';
+  if (draft.lat === null || draft.lon === null) errors.lat = errors.lon = 'Place the support: take a GPS fix here, or give distance and bearing from where you stand';
   if (heightM !== null && attachHeightM !== null && attachHeightM > heightM) errors.attachHeightM = 'The attachment point cannot be higher than the support itself';
   if (maxEnds === null || !Number.isInteger(maxEnds)) errors.maxEnds = 'How many wire ends it can hold: a whole number from 1 to 4';
 

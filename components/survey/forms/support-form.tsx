@@ -102,7 +102,7 @@ export function SupportForm({ siteId, siteSpanM, position, existing, kind = 'tre
         </>
       ) : null}
       <TextField label="Notes" testID="support-notes" multiline value={draft.notes} onChangeText={set('notes')} error={shown('notes')} />
-      <FormFooter testID="support" questions={check.questions} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={() => onDone(null)} />
+      <FormFooter testID="support" questions={check.questions} blockers={Object.values(check.errors)} saveError={saveError} canSave={!!check.fields && !busy} busy={busy} onSave={save} onCancel={() => onDone(null)} />
     </View>
   );
 }
