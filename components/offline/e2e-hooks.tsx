@@ -1,7 +1,8 @@
 import { useEffect, useRef } from 'react';
 import { useMutate, useRecords, useSyncStatus } from '@/hooks/sync';
-import { type PhotoSubject, useAttachPhoto, usePhotoQueue } from '@/components/photos';
+import { useAttachPhoto, usePhotoQueue } from '@/components/photos';
 import type { CollectionName } from '@/shared/schemas';
+import type { LoftlineE2E } from './e2e-api';
 
 /*
  * Test builds only (EXPO_PUBLIC_LOFTLINE_E2E=1 at export time, set by tests/e2e/global-setup.ts): exposes the
@@ -11,21 +12,6 @@ import type { CollectionName } from '@/shared/schemas';
  */
 
 const ENABLED = process.env.EXPO_PUBLIC_LOFTLINE_E2E === '1';
-
-export interface LoftlineE2E {
-  create(collection: CollectionName, fields: Record<string, unknown>): Promise<string>;
-  update(collection: CollectionName, id: string, fields: Record<string, unknown>): Promise<void>;
-  /** Attaches a photo given as base64 bytes; resolves to the photos record id. */
-  attachPhoto(subject: PhotoSubject, base64: string, mimeType: 'image/jpeg' | 'image/png'): Promise<string>;
-  records(collection: CollectionName): unknown[];
-  status(): unknown;
-  photosWaiting(): Promise<number>;
-}
-
-declare global {
-  // eslint-disable-next-line no-var
-  var __loftlineE2E: LoftlineE2E | undefined;
-}
 
 const TRACKED: CollectionName[] = ['supports', 'photos'];
 
@@ -39,7 +25,7 @@ function Hooks() {
   const live = useRef({ mutate, attachBytes, queue, status, records: { supports, photos } as Record<string, unknown> });
   live.current = { mutate, attachBytes, queue, status, records: { supports, photos } };
   useEffect(() => {
-    globalThis.__loftlineE2E = {
+    const hook: LoftlineE2E = {
       create: (c, f) => live.current.mutate.create(c, f as never),
       update: async (c, id, f) => void (await live.current.mutate.update(c, id, f as never)),
       attachPhoto: (subject, base64, mimeType) =>
@@ -51,6 +37,7 @@ function Hooks() {
       status: () => live.current.status,
       photosWaiting: async () => (live.current.queue ? live.current.queue.store.countWaiting(live.current.queue.clubId) : -1),
     };
+    globalThis.__loftlineE2E = hook;
     return () => {
       globalThis.__loftlineE2E = undefined;
     };

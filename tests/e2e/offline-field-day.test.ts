@@ -6,6 +6,8 @@
 import { createHash } from 'node:crypto';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+// Brings in the type of window.__loftlineE2E, the test-build hook the page exposes.
+import type {} from '../../components/offline/e2e-api';
 import { PROTOCOL_VERSION, SCHEMA_VERSION } from '../../sync/protocol';
 import { launchBrowser, newPage, screenshot } from './helpers/browser';
 import { DEMO_PASSWORD, DEMO_SITE, DEMO_USERS } from './helpers/demo-users';
