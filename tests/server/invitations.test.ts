@@ -24,7 +24,7 @@ beforeAll(async () => {
   t = await startTestApp({ clock, config: { dataDir } });
   // The real outbox on the test app's own database, so invitation rows and mail jobs share one transaction.
   mail = await openMailService({
-    connection: { url: `${String(t.deps.dataSource.options.url)}` },
+    connection: { url: String((t.deps.dataSource.options as { url?: string }).url) },
     settings: mailSettingsFromConfig(t.deps.config),
     logger: t.deps.logger,
     retry: { retryLimit: 3, retryDelaySeconds: 1, retryBackoff: true, pollingIntervalSeconds: 0.5 },

@@ -95,7 +95,7 @@ describe('dev mailbox routes', () => {
       expect(one.body).toEqual(saved);
       const page = await t.api('GET', '/api/dev/mailbox', { headers: { accept: 'text/html' } });
       expect(page.headers.get('content-type')).toMatch(/text\/html/);
-      expect(page.body).toContain('Hello &#60;Sam&#62;');
+      expect(page.body).toContain('Hello &lt;Sam&gt;');
       expect(page.body).toContain(mailboxDir(dataDir));
       const msgPage = await t.api('GET', `/api/dev/mailbox/${saved.id}`, { headers: { accept: 'text/html' } });
       expect(msgPage.body).toContain(`<a href="${t.baseUrl}/invite/${TOKEN}">`);

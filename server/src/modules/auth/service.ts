@@ -8,6 +8,7 @@ import type { AppDeps } from '../../app-deps';
 import type { UserRow } from '../../db/entities';
 import { signAccessToken } from '../../http/access-token';
 import { AppError } from '../../http/errors';
+import { passwordResetMail } from '../mail/mail-templates';
 import * as repo from './repository';
 import { burnPasswordCheck, hashPassword, hashToken, newOpaqueToken, verifyPassword } from './secrets';
 
@@ -111,14 +112,9 @@ export class AuthService {
     const token = newOpaqueToken();
     const ttlS = this.deps.config.passwordResetTtlS;
     await repo.insertPasswordReset(this.db, { userId: u.id, tokenHash: hashToken(token), expiresAt: new Date(this.now().getTime() + ttlS * 1000) });
-    const link = `${this.deps.config.appUrl}/reset-password?token=${encodeURIComponent(token)}`;
-    const minutes = Math.round(ttlS / 60);
-    await this.deps.mail.enqueue({
-      to: u.email,
-      subject: 'Reset your Loftline password',
-      text: `Hello ${u.displayName},\n\nSomeone (hopefully you) asked to reset the password of your Loftline account.\nOpen this link within ${minutes} minutes to choose a new one:\n\n${link}\n\nIf you did not ask for this, ignore this message: your password stays as it is.\n`,
-      html: `<p>Hello ${escapeHtml(u.displayName)},</p><p>Someone (hopefully you) asked to reset the password of your Loftline account. Open this link within ${minutes} minutes to choose a new one:</p><p><a href="${escapeHtml(link)}">${escapeHtml(link)}</a></p><p>If you did not ask for this, ignore this message: your password stays as it is.</p>`,
-    });
+    await this.deps.mail.enqueue(
+      passwordResetMail({ to: u.email, appUrl: this.deps.config.appUrl, token, name: u.displayName, validMinutes: Math.round(ttlS / 60) }),
+    );
   }
 
   /** Sets a new password with a reset token (single use, 1 h) and signs out every session of the account. */
@@ -141,8 +137,4 @@ export class AuthService {
     if (!u) throw new AppError('token_invalid', 'unauthenticated', 'this account no longer exists');
     return { user: toUser(u), clubs: await repo.clubsOfUser(this.db, userId) };
   }
-}
-
-export function escapeHtml(s: string): string {
-  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] as string);
 }

@@ -4,12 +4,12 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { AppDeps } from '../../app-deps';
 import { AppError } from '../../http/errors';
+import { escapeHtml } from './escape-html';
 import { validate } from '../../http/validate';
 import { FileMailbox } from './file-mailbox';
 import type { StoredMail } from './mail-message';
 import { mailboxDir } from './mail-settings';
 
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 const linkify = (s: string) => escapeHtml(s).replace(/https?:\/\/[^\s<]+/g, (url) => `<a href="${url}">${url}</a>`);
 
 function page(title: string, body: string): string {

@@ -1,10 +1,9 @@
 import { ROLE_LABELS, type Role } from '../../../../shared/schemas';
+import { escapeHtml } from './escape-html';
 import type { MailMessage } from './mail-message';
 
 /* The e-mails Loftline sends, in plain, friendly words. Each has a text part and a simple HTML part with the same link. */
 
-const escapeHtml = (s: string) =>
-  s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
 
 function trimSlash(url: string): string {
   return url.replace(/\/+$/, '');
@@ -62,12 +61,18 @@ export function invitationMail(input: {
   };
 }
 
-export function passwordResetMail(input: { to: string; appUrl: string; token: string }): MailMessage {
+/** How long a link lasts, in words: "1 hour", "90 minutes". */
+function lasting(minutes: number): string {
+  if (minutes % 60 === 0) return minutes === 60 ? '1 hour' : `${minutes / 60} hours`;
+  return `${minutes} minutes`;
+}
+
+export function passwordResetMail(input: { to: string; appUrl: string; token: string; name?: string; validMinutes?: number }): MailMessage {
   const link = passwordResetLink(input.appUrl, input.token);
   const lines = [
-    'Hello,',
+    input.name ? `Hello ${input.name},` : 'Hello,',
     'Someone asked to reset the password of your Loftline account. If it was you, open the link below and choose a new password.',
-    'The link works once and expires in 1 hour.',
+    `The link works once and expires in ${lasting(input.validMinutes ?? 60)}.`,
     'If you did not ask for this, ignore this e-mail: your password stays as it is.',
   ];
   return {
