@@ -27,13 +27,28 @@ function source(l: Leg, factor: number, k: number, H: number): LegSource {
 }
 
 let ezr = 0, ezi = 0, epr = 0, epi = 0;
+let lastKr = NaN, lastCos = 0, lastSin = 0;
 
 /** Adds one end's terms (sg = −1 at z' = 0, +1 at z' = ℓ) to the module accumulators (hot path, no allocation). */
 function endTerms(k: number, rho: number, rho2: number, w: number, iv: number, ip: number, sg: number): void {
   const R2 = rho2 + w * w;
   const R = Math.sqrt(R2);
   const kr = k * R;
-  const cr = Math.cos(kr) / R, ci = -Math.sin(kr) / R; // g
+  // Both legs start at the feed point, so their feed-end distances repeat: reuse the last cos/sin there.
+  let cosKr: number, sinKr: number;
+  if (sg < 0) {
+    if (!(Math.abs(kr - lastKr) <= 1e-13 * kr)) {
+      lastKr = kr;
+      lastCos = Math.cos(kr);
+      lastSin = Math.sin(kr);
+    }
+    cosKr = lastCos;
+    sinKr = lastSin;
+  } else {
+    cosKr = Math.cos(kr);
+    sinKr = Math.sin(kr);
+  }
+  const cr = cosKr / R, ci = -sinKr / R; // g
   const R2i = 1 / R2;
   // (1 + jkR)·g / R²
   const fr = (cr - kr * ci) * R2i, fi = (ci + kr * cr) * R2i;

@@ -31,6 +31,8 @@ export type PreparedDipole = {
   gainScale: number;
   /** Whether leg 2 mirrors leg 1 across x = 0 (then the pattern is symmetric about the broadside plane). */
   symmetric: boolean;
+  /** Last [a1, cos a1, sin a1] of each leg (gainLinear's scratch). */
+  trigCache: Float64Array;
   /** cos/sin of k·ℓ (leg length ℓ = H). */
   cosKL: number;
   sinKL: number;
@@ -88,6 +90,7 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1, method: '
     feed: { resistanceOhm, reactanceOhm },
     gainScale: (ETA0_OHM * k * k) / (4 * Math.PI * iin * iin * resistanceOhm),
     symmetric,
+    trigCache: new Float64Array([NaN, 0, 0, NaN, 0, 0]),
     cosKL: Math.cos(k * H),
     sinKL: Math.sin(k * H),
   };
@@ -146,7 +149,12 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
   // a1 = k(q − 1)ℓ/2 for each leg, q = r̂·t̂; a horizontal leg and its image share q
   const a11 = half * (rx * l1.tx + rz * l1.tz - 1);
   const a12 = half * (rx * l2.tx + rz * l2.tz - 1);
-  const c11 = Math.cos(a11), s11 = Math.sin(a11), c12 = Math.cos(a12), s12 = Math.sin(a12);
+  // a level wire seen broadside has the same a1 every call: keep the last cos/sin per leg
+  const tc = m.trigCache;
+  if (a11 !== tc[0]) { tc[0] = a11; tc[1] = Math.cos(a11); tc[2] = Math.sin(a11); }
+  if (a12 === a11) { tc[3] = a12; tc[4] = tc[1]; tc[5] = tc[2]; } // mirror legs seen broadside
+  else if (a12 !== tc[3]) { tc[3] = a12; tc[4] = Math.cos(a12); tc[5] = Math.sin(a12); }
+  const c11 = tc[1], s11 = tc[2], c12 = tc[4], s12 = tc[5];
   // direct wire: N = Σ sign·t̂·∫
   legIntegral(kl, l, a11, c11, s11, e0r, e0i, ckh, skh);
   let nxr = l1.tx * accRe, nxi = l1.tx * accIm, nzr = l1.tz * accRe, nzi = l1.tz * accIm;
@@ -159,19 +167,27 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
   let pIm = -nxi * sinA;
   if (m.ground !== 'free-space') {
     // image: mirrored path (t_z → −t_z, p_z → −h) carrying −I
-    if (l1.tz === 0) {
-      legIntegral(kl, l, a11, c11, s11, e0r, -e0i, ckh, skh);
-    } else {
-      const b = half * (rx * l1.tx - rz * l1.tz - 1);
-      legIntegral(kl, l, b, Math.cos(b), Math.sin(b), e0r, -e0i, ckh, skh);
+    // image legs: a horizontal leg keeps its a1; mirror-symmetric legs share one value broadside
+    let b1 = a11, cb1 = c11, sb1 = s11;
+    if (l1.tz !== 0) {
+      b1 = half * (rx * l1.tx - rz * l1.tz - 1);
+      cb1 = Math.cos(b1);
+      sb1 = Math.sin(b1);
     }
+    legIntegral(kl, l, b1, cb1, sb1, e0r, -e0i, ckh, skh);
     let ixr = -l1.tx * accRe, ixi = -l1.tx * accIm, izr = l1.tz * accRe, izi = l1.tz * accIm;
-    if (l2.tz === 0) {
-      legIntegral(kl, l, a12, c12, s12, e0r, -e0i, ckh, skh);
-    } else {
-      const b = half * (rx * l2.tx - rz * l2.tz - 1);
-      legIntegral(kl, l, b, Math.cos(b), Math.sin(b), e0r, -e0i, ckh, skh);
+    let b2 = a12, cb2 = c12, sb2 = s12;
+    if (l2.tz !== 0) {
+      b2 = half * (rx * l2.tx - rz * l2.tz - 1);
+      if (b2 === b1) {
+        cb2 = cb1;
+        sb2 = sb1;
+      } else {
+        cb2 = Math.cos(b2);
+        sb2 = Math.sin(b2);
+      }
     }
+    legIntegral(kl, l, b2, cb2, sb2, e0r, -e0i, ckh, skh);
     ixr += l2.tx * accRe; ixi += l2.tx * accIm; izr -= l2.tz * accRe; izi -= l2.tz * accIm;
     const itRe = ixr * sinE * cosA - izr * cosE;
     const itIm = ixi * sinE * cosA - izi * cosE;

@@ -115,7 +115,7 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
     }
   }
   const windows = OPERATOR_WINDOWS.map((w) => ({ id: w.id, fromDeg: w.fromDeg, toDeg: w.toDeg, meanGainDbi: toDbi(windowMean(m, w.fromDeg, w.toDeg)) }));
-  const groundLossDb = m.ground === 'real' ? -10 * Math.log10(radiatedFraction(m, 0.6)) : 0;
+  const groundLossDb = m.ground === 'real' ? -10 * Math.log10(radiatedFraction(m, 0.45)) : 0;
   return {
     peakGainDbi: main.gainDbi,
     takeoffDeg: main.elevationDeg,
