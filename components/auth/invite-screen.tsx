@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'expo-router';
+import { Redirect, useRouter } from 'expo-router';
 import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
@@ -17,6 +17,9 @@ const joinSchema = z.strictObject({ displayName: nameText(80, 'name'), callSign:
 export function InviteScreen({ token }: { token: string }) {
   const preview = useInvitationPreview(token);
   const { user } = useSession();
+  // Held here, not in the forms: accepting signs the person in, which re-renders this screen.
+  const accept = useAcceptInvitation();
+  if (accept.isSuccess) return <Redirect href="/" />;
   if (preview.isLoading) return <AuthFrame title="Opening the invitation…" testID="invite">{null}</AuthFrame>;
   if (preview.isError || !preview.data) {
     return (
@@ -30,7 +33,13 @@ export function InviteScreen({ token }: { token: string }) {
   return (
     <AuthFrame title={`Join ${inv.clubName}`} testID="invite">
       <Summary inv={inv} />
-      {user ? <JoinSignedIn token={token} inv={inv} email={user.email} /> : inv.needsSignUp ? <JoinWithSignUp token={token} inv={inv} /> : <SignInFirst token={token} inv={inv} />}
+      {user ? (
+        <JoinSignedIn token={token} inv={inv} email={user.email} accept={accept} />
+      ) : inv.needsSignUp ? (
+        <JoinWithSignUp token={token} inv={inv} accept={accept} />
+      ) : (
+        <SignInFirst token={token} inv={inv} />
+      )}
     </AuthFrame>
   );
 }
@@ -51,9 +60,9 @@ function Summary({ inv }: { inv: InvitationPreview }) {
   );
 }
 
-function JoinSignedIn({ token, inv, email }: { token: string; inv: InvitationPreview; email: string }) {
-  const accept = useAcceptInvitation();
-  const router = useRouter();
+type Accept = ReturnType<typeof useAcceptInvitation>;
+
+function JoinSignedIn({ token, inv, email, accept }: { token: string; inv: InvitationPreview; email: string; accept: Accept }) {
   const other = email.toLowerCase() !== inv.email.toLowerCase();
   return (
     <>
@@ -63,17 +72,15 @@ function JoinSignedIn({ token, inv, email }: { token: string; inv: InvitationPre
         </Txt>
       ) : null}
       <ErrorText boxed message={accept.error ? errorMessage(accept.error) : null} testID="invite-error" />
-      <Button label={`Join ${inv.clubName}`} icon="people" testID="invite-accept" busy={accept.isPending} onPress={() => accept.mutate({ token }, { onSuccess: () => router.replace('/') })} />
+      <Button label={`Join ${inv.clubName}`} icon="people" testID="invite-accept" busy={accept.isPending} onPress={() => accept.mutate({ token })} />
     </>
   );
 }
 
-function JoinWithSignUp({ token, inv }: { token: string; inv: InvitationPreview }) {
-  const accept = useAcceptInvitation();
-  const router = useRouter();
+function JoinWithSignUp({ token, inv, accept }: { token: string; inv: InvitationPreview; accept: Accept }) {
   const { control, handleSubmit } = useForm({ resolver: zodResolver(joinSchema), mode: 'onChange', defaultValues: { displayName: '', callSign: '', password: '' } });
   const server = fieldErrors(accept.error);
-  const submit = handleSubmit((signUp) => accept.mutate({ token, signUp }, { onSuccess: () => router.replace('/') }));
+  const submit = handleSubmit((signUp) => accept.mutate({ token, signUp }));
   return (
     <>
       <Txt color={colors.inkMuted}>Create your Loftline account for {inv.email} and join in one step.</Txt>

@@ -24,7 +24,7 @@ export function BottomBar({ items, active }: { items: NavItem[]; active: NavKey 
       ) : null}
       <Modal visible={moreOpen} transparent animationType="slide" onRequestClose={() => setMoreOpen(false)}>
         <Pressable style={styles.backdrop} onPress={() => setMoreOpen(false)} accessibilityLabel="Close More" testID="nav-more-backdrop">
-          <View style={[styles.sheet, { paddingBottom: insets.bottom + spacing.m }]}>
+          <View style={[styles.sheet, { paddingBottom: insets.bottom + spacing.m }]} testID="nav-more-sheet">
             <Txt variant="title" style={styles.sheetTitle} accessibilityRole="header">
               More
             </Txt>
