@@ -105,9 +105,15 @@ export async function createSyncClient(opts: SyncClientOptions): Promise<SyncCli
     status = { ...status, ...patch };
     for (const l of statusListeners) l(status);
   };
+  let stopped = false;
   const refreshCounts = async () => {
-    const [pendingChanges, rejected, m] = await Promise.all([store.pendingCount(), store.rejections(), store.getMeta()]);
-    setStatus({ pendingChanges, rejectedCount: rejected.length, lastSyncedAt: m.lastSyncedAtMs === null ? null : new Date(m.lastSyncedAtMs).toISOString() });
+    if (stopped) return;
+    try {
+      const [pendingChanges, rejected, m] = await Promise.all([store.pendingCount(), store.rejections(), store.getMeta()]);
+      setStatus({ pendingChanges, rejectedCount: rejected.length, lastSyncedAt: m.lastSyncedAtMs === null ? null : new Date(m.lastSyncedAtMs).toISOString() });
+    } catch {
+      // The counts are refreshed again after the next write or sync; a closed or busy store is not worth an error.
+    }
   };
   const channel = opts.createChannel?.(`loftline-sync-changes-${clubId}`);
   const notify = (collections: Set<CollectionName>, fromOtherTab = false) => {
@@ -266,6 +272,7 @@ export async function createSyncClient(opts: SyncClientOptions): Promise<SyncCli
       scheduler.start();
     },
     async stop() {
+      stopped = true;
       stopTriggers?.();
       scheduler.stop();
       leader.close();

@@ -32,6 +32,8 @@ async function open(name: string): Promise<IDBPDatabase> {
       records.createIndex('byCollection', 'collection');
       const outbox = db.createObjectStore('outbox', { keyPath: 'mutationId' });
       outbox.createIndex('byRecord', ['collection', 'recordId']);
+      // Within one state the index keeps primary-key (mutation id) order: the oldest pending entries come first.
+      outbox.createIndex('byState', 'state');
       const rejections = db.createObjectStore('rejections', { keyPath: 'mutationId' });
       rejections.createIndex('byRecord', ['collection', 'recordId']);
       db.createObjectStore('meta');
@@ -49,6 +51,8 @@ function txOps(tx: Tx): StoreTx {
     clearRecords: () => write('records').clear(),
     getOutbox: (id) => s('outbox').get(id),
     allOutbox: () => s('outbox').getAll(),
+    pendingOutbox: (limit) => s('outbox').index('byState').getAll('pending', limit),
+    countPending: () => s('outbox').index('byState').count('pending'),
     outboxForRecord: (c, id) => s('outbox').index('byRecord').getAll([c, id]),
     putOutbox: async (e) => void (await write('outbox').put(e)),
     deleteOutbox: (id) => write('outbox').delete(id),

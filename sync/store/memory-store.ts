@@ -17,6 +17,8 @@ export class MemoryDatabase {
 
 const recordKey = (c: string, id: string) => `${c}/${id}`;
 const copy = <T>(v: T): T => structuredClone(v);
+// Reads need no copy: the store core parses every read with zod, which builds new objects.
+const asRead = <T>(v: T): T => v;
 
 export interface MemoryStoreOptions {
   beforeCommit?: BeforeCommitHook;
@@ -28,24 +30,28 @@ export function createMemoryStore(db: MemoryDatabase = new MemoryDatabase(), opt
 
   const runOne = async <T>(mode: 'readonly' | 'readwrite', operation: string, fn: (tx: StoreTx) => Promise<T>): Promise<T> => {
     if (closed) throw new Error('the local store is closed');
-    const records = new Map(db.records);
-    const outbox = new Map(db.outbox);
-    const rejections = new Map(db.rejections);
+    // A read-write transaction works on staging copies committed at the end; a read-only one reads in place.
+    const staged = mode === 'readwrite';
+    const records = staged ? new Map(db.records) : db.records;
+    const outbox = staged ? new Map(db.outbox) : db.outbox;
+    const rejections = staged ? new Map(db.rejections) : db.rejections;
     let meta = db.meta;
     const tx: StoreTx = {
-      getRecord: async (c, id) => copy(records.get(recordKey(c, id))),
+      getRecord: async (c, id) => asRead(records.get(recordKey(c, id))),
       putRecord: async (e) => void records.set(recordKey(e.collection, e.id), copy(e)),
-      allRecords: async (c: CollectionName) => [...records.values()].filter((r) => r.collection === c).map(copy),
+      allRecords: async (c: CollectionName) => [...records.values()].filter((r) => r.collection === c).map(asRead),
       clearRecords: async () => records.clear(),
-      getOutbox: async (id) => copy(outbox.get(id)),
-      allOutbox: async () => [...outbox.values()].map(copy),
-      outboxForRecord: async (c, id) => [...outbox.values()].filter((e) => e.collection === c && e.recordId === id).map(copy),
+      getOutbox: async (id) => asRead(outbox.get(id)),
+      allOutbox: async () => [...outbox.values()].map(asRead),
+      pendingOutbox: async (limit) => [...outbox.values()].filter((e) => e.state === 'pending').sort((a, b) => a.mutationId - b.mutationId).slice(0, limit).map(asRead),
+      countPending: async () => [...outbox.values()].filter((e) => e.state === 'pending').length,
+      outboxForRecord: async (c, id) => [...outbox.values()].filter((e) => e.collection === c && e.recordId === id).map(asRead),
       putOutbox: async (e) => void outbox.set(e.mutationId, copy(e)),
       deleteOutbox: async (id) => void outbox.delete(id),
-      getMeta: async () => copy(meta),
+      getMeta: async () => asRead(meta),
       putMeta: async (m) => void (meta = copy(m)),
-      allRejections: async () => [...rejections.values()].map(copy),
-      rejectionsForRecord: async (c, id) => [...rejections.values()].filter((r) => r.collection === c && r.recordId === id).map(copy),
+      allRejections: async () => [...rejections.values()].map(asRead),
+      rejectionsForRecord: async (c, id) => [...rejections.values()].filter((r) => r.collection === c && r.recordId === id).map(asRead),
       putRejection: async (r) => void rejections.set(r.mutationId, copy(r)),
       deleteRejection: async (id) => void rejections.delete(id),
     };

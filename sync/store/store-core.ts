@@ -32,6 +32,9 @@ export interface StoreTx {
   clearRecords(): Promise<void>;
   getOutbox(mutationId: number): Promise<unknown>;
   allOutbox(): Promise<unknown[]>;
+  /** The oldest `limit` entries still waiting to be sent, in mutation order. */
+  pendingOutbox(limit: number): Promise<unknown[]>;
+  countPending(): Promise<number>;
   outboxForRecord(collection: CollectionName, id: string): Promise<unknown[]>;
   putOutbox(entry: OutboxEntry): Promise<void>;
   deleteOutbox(mutationId: number): Promise<void>;
@@ -89,12 +92,11 @@ export function createStoreFromTx(run: RunTx, close: () => Promise<void>): Local
       });
     },
     async pendingOutbox(limit) {
-      const rows = parseOutbox(await run('readonly', 'read', (tx) => tx.allOutbox()));
-      return rows.filter((e) => e.state === 'pending').sort((a, b) => a.mutationId - b.mutationId).slice(0, limit);
+      const rows = parseOutbox(await run('readonly', 'read', (tx) => tx.pendingOutbox(limit)));
+      return rows.filter((e) => e.state === 'pending').sort((a, b) => a.mutationId - b.mutationId);
     },
-    async pendingCount() {
-      const rows = parseOutbox(await run('readonly', 'read', (tx) => tx.allOutbox()));
-      return rows.filter((e) => e.state === 'pending').length;
+    pendingCount() {
+      return run('readonly', 'read', (tx) => tx.countPending());
     },
     markPushed(lastAppliedMutationId: number, rejected: Rejection[], metaPatch?: Partial<SyncMeta>) {
       return run('readwrite', 'mark-pushed', async (tx) => {

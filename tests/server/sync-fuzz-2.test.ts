@@ -1,0 +1,5 @@
+// Seeded convergence fuzz, share 2 of 3 (seeds with seed % 3 === 1); the fuzz itself and how to replay a
+// seed are described in tests/sync/harness/fuzz-runner.ts.
+import { defineSyncFuzz } from '../sync/harness/fuzz-runner';
+
+defineSyncFuzz(1, 3);
