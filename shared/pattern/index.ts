@@ -19,7 +19,7 @@
  *   resonanceInfo(input, fromMhz, toMhz)     lowest-SWR and zero-reactance frequencies of that wire
  *   swr(resistanceOhm, reactanceOhm, z0Ohm = 50)
  *   dipoleWire(input)                        the wire as 3-D points (x along the wire, z up) for drawings
- *   OPERATOR_WINDOWS, GAIN_FLOOR_DBI
+ *   OPERATOR_WINDOWS, GAIN_FLOOR_DBI, modelNotes(...)   (PatternSummary.modelNotes: where a case stretches the model)
  * Gains are dBi relative to the power delivered INTO the feed point; over real ground that includes what
  * the ground absorbs, reported as groundLossDb.
  */
@@ -30,4 +30,4 @@ export type { WirePoint } from './geometry';
 export { summarizePattern } from './summary';
 export { elevationCut, azimuthCut, gainAt, pattern3d } from './cuts';
 export { feedImpedance, feedSweep, resonanceInfo, swr } from './feed';
-export { OPERATOR_WINDOWS, GAIN_FLOOR_DBI } from './windows';
+export { OPERATOR_WINDOWS, GAIN_FLOOR_DBI, modelNotes } from './windows';

@@ -29,6 +29,8 @@ export type PreparedDipole = {
   feed: { resistanceOhm: number; reactanceOhm: number };
   /** Multiply |N⊥|² by this to get linear gain. */
   gainScale: number;
+  /** Height of the lowest point of the wire. */
+  lowestM: number;
   /** Whether leg 2 mirrors leg 1 across x = 0 (then the pattern is symmetric about the broadside plane). */
   symmetric: boolean;
   /** Last [a1, cos a1, sin a1] of each leg (gainLinear's scratch). */
@@ -90,6 +92,7 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1, method: '
     feed: { resistanceOhm, reactanceOhm },
     gainScale: (ETA0_OHM * k * k) / (4 * Math.PI * iin * iin * resistanceOhm),
     symmetric,
+    lowestM: g.lowestM,
     trigCache: new Float64Array([NaN, 0, 0, NaN, 0, 0]),
     cosKL: Math.cos(k * H),
     sinKL: Math.sin(k * H),
@@ -141,7 +144,7 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
   if (m.ground !== 'free-space' && sinE < 0) return 0;
   const k = m.k, H = m.H;
   const rx = cosE * cosA, rz = sinE;
-  const [l1, l2] = m.legs;
+  const l1 = m.legs[0], l2 = m.legs[1];
   const ph0 = k * l1.pz * rz;
   const e0r = Math.cos(ph0), e0i = Math.sin(ph0);
   const ckh = m.cosKL, skh = m.sinKL;

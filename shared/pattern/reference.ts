@@ -3,7 +3,7 @@ import { gainLinear, prepareDipole } from './model';
 import { mainLobe } from './summary';
 import { swr } from './swr';
 import type { DipoleInput, PatternSummary } from './types';
-import { OPERATOR_WINDOWS } from './windows';
+import { modelNotes, OPERATOR_WINDOWS } from './windows';
 
 /*
  * The straightforward reference the fast summary is checked against (tests and `npm run bench`):
@@ -103,5 +103,6 @@ export function referenceSummary(input: DipoleInput): PatternSummary {
     swr50: swr(m.feed.resistanceOhm, m.feed.reactanceOhm, 50),
     groundLossDb,
     heightWavelengths: input.heightM / m.lambdaM,
+    modelNotes: modelNotes({ ground: m.ground, heightWavelengths: m.input.heightM / m.lambdaM, lowestWavelengths: m.lowestM / m.lambdaM, lengthWavelengths: (2 * m.H) / m.lambdaM }),
   };
 }

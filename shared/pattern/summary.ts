@@ -5,7 +5,7 @@ import { radiatedFraction } from './power';
 import { brentMinimize, illinoisRoot } from './search';
 import { swr } from './swr';
 import type { DipoleInput, PatternSummary } from './types';
-import { OPERATOR_WINDOWS } from './windows';
+import { modelNotes, OPERATOR_WINDOWS } from './windows';
 
 /*
  * The fast summary. The broadside elevation cut is sampled on a grid uniform in sin Δ (lobes of a wire
@@ -127,6 +127,7 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
     swr50: swr(m.feed.resistanceOhm, m.feed.reactanceOhm, 50),
     groundLossDb,
     heightWavelengths: m.input.heightM / m.lambdaM,
+    modelNotes: modelNotes({ ground: m.ground, heightWavelengths: m.input.heightM / m.lambdaM, lowestWavelengths: m.lowestM / m.lambdaM, lengthWavelengths: (2 * m.H) / m.lambdaM }),
   };
 }
 

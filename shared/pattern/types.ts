@@ -40,6 +40,8 @@ export type PatternSummary = {
   groundLossDb: number;
   /** Feed-point height in wavelengths. */
   heightWavelengths: number;
+  /** Plain-words notes where this case stretches the model (empty when it is well inside it). */
+  modelNotes: string[];
 };
 
 export type ElevationPoint = { deg: number; gainDbi: number };

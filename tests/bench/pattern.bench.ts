@@ -16,7 +16,7 @@ function lcg(seed: number): () => number {
   };
 }
 
-function inputs(n: number): DipoleInput[] {
+export function inputs(n: number): DipoleInput[] {
   const rnd = lcg(20261201);
   const grounds = GROUND_CLASS_NAMES.map((g) => groundFromClass(g));
   const freqs = [1.9, 3.6, 5.35, 7.15, 10.12, 14.175, 18.118, 21.225, 24.94, 28.5, 50.5];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { groundFromClass } from '../../shared/ground';
-import { feedSweep, resonanceInfo, swr, type DipoleInput } from '../../shared/pattern';
+import { feedSweep, resonanceInfo, summarizePattern, swr, type DipoleInput } from '../../shared/pattern';
 import { halfWaveCutM } from '../../shared/wire';
 
 const forty: DipoleInput = { freqMhz: 7.15, ground: groundFromClass('average'), shape: 'flat', heightM: 12 };
@@ -44,5 +44,14 @@ describe('feed point across frequency', () => {
   it('bad ranges get a clear error', () => {
     expect(() => feedSweep(forty, 8, 7, 10)).toThrow(/0 < from < to/);
     expect(() => feedSweep(forty, 7, 8, 1)).toThrow(/steps/);
+  });
+
+  it('the summary says where a case stretches the model (model limits in README)', () => {
+    expect(summarizePattern(forty).modelNotes).toEqual([]);
+    const onTwenty = summarizePattern({ ...forty, freqMhz: 14.1, lengthM: halfWaveCutM(7.15) });
+    expect(onTwenty.modelNotes.join(' ')).toMatch(/full wavelength/);
+    expect(onTwenty.feed.resistanceOhm).toBeGreaterThan(1000); // near a full wave the feed current nearly vanishes
+    const low160 = summarizePattern({ freqMhz: 1.85, ground: groundFromClass('average'), shape: 'flat', heightM: 10 });
+    expect(low160.modelNotes.join(' ')).toMatch(/lower than 0\.1 wavelength/);
   });
 });

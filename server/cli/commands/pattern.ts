@@ -127,6 +127,7 @@ export async function run(argv: string[]): Promise<number> {
       Number.isFinite(result.swr50) ? f(result.swr50, 2) : '∞'
     } on 50 Ω`,
     `Ground loss    ${f(result.groundLossDb, 2)} dB`,
+    ...result.modelNotes.map((n) => `Note: ${n}`),
     '',
     'Elevation cut (broadside):',
     ...result.elevation.map((p) => `  ${f(p.deg).padStart(5)}°  ${f(p.gainDbi, 2).padStart(7)} dBi`),
