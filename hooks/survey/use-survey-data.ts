@@ -18,15 +18,23 @@ export type SurveyData = {
   siteSpanM: number | null;
 };
 
+function onSite<T extends { siteId: string; deletedAt: string | null }>(xs: readonly T[] | undefined, siteId: string): T[] {
+  return (xs ?? []).filter((x) => x.siteId === siteId && !x.deletedAt);
+}
+
 /** One site's survey, read from the phone's local store (live: updates as records change or sync in). */
 export function useSurveyData(siteId: string): SurveyData {
   const site = useRecord('sites', siteId) as Site | null | undefined;
-  const onSite = <T extends { siteId: string; deletedAt: string | null }>(xs: readonly T[] | undefined) => (xs ?? []).filter((x) => x.siteId === siteId && !x.deletedAt);
-  const supports = onSite(useRecords('supports') as Support[] | undefined);
-  const hazards = onSite(useRecords('hazards') as Hazard[] | undefined);
-  const positions = onSite(useRecords('operatingPositions') as OperatingPosition[] | undefined);
-  const measurements = onSite(useRecords('measurements') as Measurement[] | undefined);
-  const photos = onSite(useRecords('photos') as Photo[] | undefined);
+  const allSupports = useRecords('supports') as Support[] | undefined;
+  const allHazards = useRecords('hazards') as Hazard[] | undefined;
+  const allPositions = useRecords('operatingPositions') as OperatingPosition[] | undefined;
+  const allMeasurements = useRecords('measurements') as Measurement[] | undefined;
+  const allPhotos = useRecords('photos') as Photo[] | undefined;
+  const supports = useMemo(() => onSite(allSupports, siteId), [allSupports, siteId]);
+  const hazards = useMemo(() => onSite(allHazards, siteId), [allHazards, siteId]);
+  const positions = useMemo(() => onSite(allPositions, siteId), [allPositions, siteId]);
+  const measurements = useMemo(() => onSite(allMeasurements, siteId), [allMeasurements, siteId]);
+  const photos = useMemo(() => onSite(allPhotos, siteId), [allPhotos, siteId]);
   const live = site && !site.deletedAt ? site : null;
   const project = useMemo(() => (live ? projector({ lat: live.refLat, lon: live.refLon }) : null), [live?.refLat, live?.refLon]);
   const features = useMemo(() => (project ? buildFeatures({ supports, hazards, operatingPositions: positions }, project) : []), [project, supports, hazards, positions]);

@@ -18,7 +18,7 @@ export function FormFooter({ testID, questions, blockers = [], saveError, canSav
       {!canSave && !busy && blockers.length > 0 ? (
         <View style={styles.blockers} testID={`${testID}-blockers`}>
           <Txt variant="label">Before saving:</Txt>
-          {[...new Set(blockers)].map((b) => <Txt key={b} variant="caption">• {b}</Txt>)}
+          {[...new Set(blockers)].map((b) => <Txt key={b} variant="caption">• {b.charAt(0).toUpperCase() + b.slice(1)}</Txt>)}
         </View>
       ) : null}
       <ErrorText message={saveError} testID={`${testID}-save-error`} boxed />

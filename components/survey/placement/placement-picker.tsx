@@ -62,7 +62,9 @@ export function PlacementPicker({ position, value, onChange, testID, what, error
             {fix ? `${fix.count} ${fix.count === 1 ? 'reading' : 'readings'} · ±${formatLengthM(fix.accuracyM)}` : position.status === 'starting' ? 'Waiting for the first reading…' : 'No readings yet'}
           </Tabular>
           <Txt variant="caption" color={colors.inkMuted}>
-            {running ? (enough ? 'Keep still: more readings make it better. Use it when the accuracy stops improving.' : `Hold still for at least ${MIN_READINGS} readings…`) : 'Fix taken.'}
+            {mode === 'offset'
+              ? 'The point is placed from your averaged position, which improves while you stand still.'
+              : running ? (enough ? 'Keep still: more readings make it better. Use it when the accuracy stops improving.' : `Hold still for at least ${MIN_READINGS} readings…`) : 'Fix taken.'}
           </Txt>
         </View>
         {running ? null : <Button label="Again" testID={`${testID}-restart`} variant="quiet" compact onPress={() => { restart(); setRunning(true); if (mode === 'here') onChange(null); }} />}

@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { Button, Txt } from '@/components/ui';
 import { colors, radii, spacing } from '@/constants/theme';
 import type { Site } from '@/shared/schemas';
+import { SyncBadge } from './sync-badge';
 
 /** The site-wide facts a scout records once: the ground and the notes on access and rules. */
 export function SiteSummary({ site, canEdit, onGround, onNotes }: { site: Site; canEdit: boolean; onGround: () => void; onNotes: () => void }) {
@@ -11,6 +12,10 @@ export function SiteSummary({ site, canEdit, onGround, onNotes }: { site: Site; 
   const notes = [site.accessNotes, site.rules].filter(Boolean).join(' · ');
   return (
     <View style={styles.box} testID="site-summary">
+      <View style={styles.row}>
+        <Txt variant="label" style={styles.grow}>The site</Txt>
+        <SyncBadge collection="sites" id={site.id} testID="site-summary-sync" />
+      </View>
       <View style={styles.row}>
         <View style={styles.grow}>
           <Txt variant="label" color={colors.inkMuted}>Ground</Txt>
