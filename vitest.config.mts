@@ -12,6 +12,8 @@ export default defineConfig({
     projects: [
       {
         oxc: legacyDecorators,
+        // The app's `@/…` imports (tsconfig paths), so hooks and components can be unit-tested as written.
+        resolve: { alias: [{ find: /^@\//, replacement: `${new URL('./', import.meta.url).pathname}` }] },
         test: {
           name: 'unit',
           environment: 'node',

@@ -9,6 +9,7 @@ import { errorMessage, fieldErrors } from '@/hooks/api/client';
 import { useAcceptInvitation, useInvitationPreview, type InvitationPreview } from '@/hooks/api/use-invitations';
 import { useSession } from '@/hooks/auth/use-session';
 import { callSignSchema, nameText, passwordSchema, ROLE_LABELS } from '@/shared/schemas';
+import { formatDayRange } from '@/components/events/day-range';
 import { AuthFrame, AuthLink } from './auth-frame';
 
 const joinSchema = z.strictObject({ displayName: nameText(80, 'name'), callSign: callSignSchema, password: passwordSchema });
@@ -53,7 +54,7 @@ function Summary({ inv }: { inv: InvitationPreview }) {
           {inv.clubName} invites {inv.email} as {ROLE_LABELS[inv.role]}.
         </Txt>
         <Txt variant="caption" color={colors.inkMuted}>
-          The invitation works until {new Date(inv.expiresAt).toLocaleString()}.
+          The invitation works until {formatDayRange(inv.expiresAt.slice(0, 10), inv.expiresAt.slice(0, 10))}, {inv.expiresAt.slice(11, 16)} UTC.
         </Txt>
       </View>
     </View>

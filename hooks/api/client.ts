@@ -100,15 +100,20 @@ export function errorMessage(error: unknown): string {
   return 'Something went wrong. Try again.';
 }
 
-/** Field errors the server sent back (zod issues in details), keyed by the first path segment. */
+/**
+ * Field errors the server sent back (`details.issues`, each with a path such as "email" or
+ * "signUp.password"), keyed by the path's last named segment: the form field it belongs to.
+ */
 export function fieldErrors(error: unknown): Record<string, string> {
   const out: Record<string, string> = {};
   if (!(error instanceof ApiRequestError) || !error.details) return out;
-  const d = error.details as { issues?: { path?: (string | number)[]; message?: string }[] } | { path?: (string | number)[]; message?: string }[];
+  type Issue = { path?: string | (string | number)[]; message?: string };
+  const d = error.details as { issues?: Issue[] } | Issue[];
   const issues = Array.isArray(d) ? d : d.issues;
   for (const issue of issues ?? []) {
-    const key = issue.path?.[0];
-    if (key !== undefined && issue.message && !(String(key) in out)) out[String(key)] = issue.message;
+    const segments = (typeof issue.path === 'string' ? issue.path.split('.') : (issue.path ?? []).map(String)).filter((p) => p !== '' && !/^\d+$/.test(p));
+    const key = segments[segments.length - 1];
+    if (key !== undefined && issue.message && !(key in out)) out[key] = issue.message;
   }
   return out;
 }
