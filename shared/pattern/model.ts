@@ -33,6 +33,8 @@ export type PreparedDipole = {
   lowestM: number;
   /** Whether leg 2 mirrors leg 1 across x = 0 (then the pattern is symmetric about the broadside plane). */
   symmetric: boolean;
+  /** Per-elevation memo of gainLinear (see fillRow). */
+  rowCache: Float64Array;
   /** Last [a1, cos a1, sin a1] of each leg (gainLinear's scratch). */
   trigCache: Float64Array;
   /** cos/sin of k·ℓ (leg length ℓ = H). */
@@ -94,6 +96,7 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1, method: '
     symmetric,
     lowestM: g.lowestM,
     trigCache: new Float64Array([NaN, 0, 0, NaN, 0, 0]),
+    rowCache: new Float64Array([NaN, 0, 0, 0, 0, 0, 0]),
     cosKL: Math.cos(k * H),
     sinKL: Math.sin(k * H),
   };
@@ -137,6 +140,34 @@ function legIntegral(kl: number, l: number, a1: number, c1: number, s1: number, 
 }
 
 /**
+ * Fills m.rowCache for elevation sin Δ: [sinΔ, cos ph0, sin ph0, Γh re, Γh im, Γv re, Γv im], with
+ * ph0 = k·h·sinΔ and the Fresnel coefficients at grazing angle Δ (see ground/fresnel.ts; inlined, no allocation).
+ */
+function fillRow(m: PreparedDipole, sinE: number): void {
+  const rc = m.rowCache;
+  const ph0 = m.k * m.legs[0].pz * sinE;
+  rc[0] = sinE;
+  rc[1] = Math.cos(ph0);
+  rc[2] = Math.sin(ph0);
+  if (m.ground !== 'real') return;
+  const cos2 = 1 - sinE * sinE;
+  const wr = m.epsRe - cos2, wi = m.epsIm;
+  const mag = Math.sqrt(wr * wr + wi * wi);
+  const rr = Math.sqrt((mag + wr) / 2);
+  let ri = Math.sqrt(Math.max(0, (mag - wr) / 2));
+  if (wi < 0) ri = -ri;
+  let nr = sinE - rr, ni = -ri, dr = sinE + rr, di = ri;
+  let dd = dr * dr + di * di;
+  rc[3] = (nr * dr + ni * di) / dd;
+  rc[4] = (ni * dr - nr * di) / dd;
+  const er = m.epsRe * sinE, ei = m.epsIm * sinE;
+  nr = er - rr; ni = ei - ri; dr = er + rr; di = ei + ri;
+  dd = dr * dr + di * di;
+  rc[5] = (nr * dr + ni * di) / dd;
+  rc[6] = (ni * dr - nr * di) / dd;
+}
+
+/**
  * Linear gain (relative to an isotropic radiator fed the same power) at elevation Δ and azimuth φ, given as
  * sines and cosines. φ = 0 points along the wire towards end 1. Below the horizon over ground: 0.
  */
@@ -145,8 +176,10 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
   const k = m.k, H = m.H;
   const rx = cosE * cosA, rz = sinE;
   const l1 = m.legs[0], l2 = m.legs[1];
-  const ph0 = k * l1.pz * rz;
-  const e0r = Math.cos(ph0), e0i = Math.sin(ph0);
+  // per-elevation values (feed-point phase, Fresnel coefficients) repeat across an azimuth sweep: memo them
+  const rc = m.rowCache;
+  if (rc[0] !== sinE) fillRow(m, sinE);
+  const e0r = rc[1], e0i = rc[2];
   const ckh = m.cosKL, skh = m.sinKL;
   const l = H, kl = k * H, half = kl / 2;
   // a1 = k(q − 1)ℓ/2 for each leg, q = r̂·t̂; a horizontal leg and its image share q
@@ -199,20 +232,7 @@ export function gainLinear(m: PreparedDipole, sinE: number, cosE: number, sinA: 
     if (m.ground === 'perfect') {
       tRe += itRe; tIm += itIm; pRe += ipRe; pIm += ipIm;
     } else {
-      // Fresnel at grazing angle Δ: Γv on θ̂, −Γh on φ̂ (see ground/fresnel.ts), inlined to avoid allocation
-      const cos2 = 1 - sinE * sinE;
-      const wr = m.epsRe - cos2, wi = m.epsIm;
-      const mag = Math.sqrt(wr * wr + wi * wi);
-      const rr = Math.sqrt((mag + wr) / 2);
-      let ri = Math.sqrt(Math.max(0, (mag - wr) / 2));
-      if (wi < 0) ri = -ri;
-      let nr = sinE - rr, ni = -ri, dr = sinE + rr, di = ri;
-      let dd = dr * dr + di * di;
-      const hRe = (nr * dr + ni * di) / dd, hIm = (ni * dr - nr * di) / dd;
-      const er = m.epsRe * sinE, ei = m.epsIm * sinE;
-      nr = er - rr; ni = ei - ri; dr = er + rr; di = ei + ri;
-      dd = dr * dr + di * di;
-      const vRe = (nr * dr + ni * di) / dd, vIm = (ni * dr - nr * di) / dd;
+      const hRe = rc[3], hIm = rc[4], vRe = rc[5], vIm = rc[6];
       tRe += vRe * itRe - vIm * itIm;
       tIm += vRe * itIm + vIm * itRe;
       pRe -= hRe * ipRe - hIm * ipIm;
