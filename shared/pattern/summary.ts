@@ -134,7 +134,7 @@ export function summarizePrepared(m: PreparedDipole): PatternSummary {
 /** Mean linear broadside gain over elevations [fromDeg, toDeg], uniform in angle (Gauss–Legendre). */
 export function windowMean(m: PreparedDipole, fromDeg: number, toDeg: number): number {
   const du = Math.sin(toDeg * DEG) - Math.sin(fromDeg * DEG);
-  const rule = gaussLegendre(6 + Math.ceil((8 * du * m.input.heightM) / m.lambdaM));
+  const rule = gaussLegendre(4 + Math.ceil((6 * du * m.input.heightM) / m.lambdaM));
   const h = (toDeg - fromDeg) / 2;
   const c = (toDeg + fromDeg) / 2;
   let s = 0;
