@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { collectionNameSchema, idSchema, isoInstantSchema, type CollectionName } from '../../shared/schemas';
-import { cursorSchema, hlcStringSchema, mutationSchema, rejectionSchema, wireRecordSchema, type Rejection, type WireRecord } from '../protocol';
+import { cursorSchema, hlcNodeSchema, hlcStringSchema, mutationSchema, rejectionSchema, wireRecordSchema, type Rejection, type WireRecord } from '../protocol';
 
 /** What the app sees of a record: the server's copy with this device's unsynced changes laid over it. */
 export const localViewSchema = z.strictObject({
@@ -43,6 +43,8 @@ export const localRejectionSchema = rejectionSchema.extend({
 export type LocalRejection = z.infer<typeof localRejectionSchema>;
 
 export const syncMetaSchema = z.strictObject({
+  /** This database's device id (the clock node and the server's key for the mutation counter): kept with the counter, so they are lost or kept together. */
+  deviceId: hlcNodeSchema.nullable().default(null),
   /** Next mutation id to hand out (the per-device counter). */
   nextMutationId: z.number().int().positive(),
   cursor: cursorSchema,
@@ -53,7 +55,7 @@ export const syncMetaSchema = z.strictObject({
   lastSyncedAtMs: z.number().nullable(),
 });
 export type SyncMeta = z.infer<typeof syncMetaSchema>;
-export const INITIAL_META: SyncMeta = { nextMutationId: 1, cursor: '0', hlcLast: null, clockOffsetMs: 0, lastSyncedAtMs: null };
+export const INITIAL_META: SyncMeta = { deviceId: null, nextMutationId: 1, cursor: '0', hlcLast: null, clockOffsetMs: 0, lastSyncedAtMs: null };
 
 export type RecordSyncState = 'synced' | 'pending' | 'rejected';
 
