@@ -54,7 +54,12 @@ export function createTabLeader(name: string, env: TabLeaderEnv): TabLeader {
     const announce = () => channel.postMessage({ type: 'tab-alive', tabId: env.tabId });
     channel.addEventListener('message', (event) => {
       const d = event.data as { type?: string; tabId?: string } | null;
-      if (d?.type === 'tab-alive' && typeof d.tabId === 'string') seen.set(d.tabId, env.nowMs());
+      if (d?.type === 'tab-alive' && typeof d.tabId === 'string') {
+        // A newcomer learns of us at once instead of at our next heartbeat.
+        const isNew = !seen.has(d.tabId);
+        seen.set(d.tabId, env.nowMs());
+        if (isNew) announce();
+      }
       if (d?.type === 'tab-gone' && typeof d.tabId === 'string') seen.delete(d.tabId);
     });
     announce();
