@@ -62,11 +62,15 @@ function verdict(level: ClearanceLevel): string {
  * T0B06 fall check against one power line. Distances are horizontal and assume the line can be at any
  * height (a sagging span, a line lower than recorded), so the recorded line height is not relied on.
  */
-export function powerLineFallClearance(fp: AntennaFootprint, line: RecordedHazard, opts: ClearanceOptions): Clearance {
+function fallCore(fp: AntennaFootprint, line: RecordedHazard, opts: ClearanceOptions) {
   const c = closest(fp, line, (s) => fallReachM(s, fp.swingReachM));
   if (!c) throw new Error('an antenna footprint needs at least one support');
   const requiredM = c.reachM + T0B06_MIN_GAP_M;
-  const level = levelForDistance(c.distanceM, requiredM, opts.reviewMarginFraction);
+  return { c, requiredM, level: levelForDistance(c.distanceM, requiredM, opts.reviewMarginFraction) };
+}
+
+export function powerLineFallClearance(fp: AntennaFootprint, line: RecordedHazard, opts: ClearanceOptions): Clearance {
+  const { c, requiredM, level } = fallCore(fp, line, opts);
   return {
     key: `power-line:${line.id}`,
     kind: 'power-line',
@@ -82,51 +86,77 @@ export function powerLineFallClearance(fp: AntennaFootprint, line: RecordedHazar
   };
 }
 
-/** OSHA Table A while raising a mast: the mast's height plus the table distance for the line's voltage. */
-export function mastRaisingClearance(
-  mast: FootprintSupport,
-  line: RecordedHazard,
-  opts: ClearanceOptions,
-): Clearance {
+/** The mast-raising level and distances; a line without voltage is never better than needs-review. */
+function mastRaisingCore(mast: FootprintSupport, line: RecordedHazard, opts: ClearanceOptions) {
   const distanceM = pointShapeDistanceM(mast.at, line.shape);
   const tableM = oshaTableAClearanceM(line.voltageKv);
-  const key = `mast-raising:${mast.supportId}:${line.id}`;
-  const rule = 'raising a mast: mast height plus the Table A distance for the line voltage';
   if (tableM === null) {
     const requiredM = mast.heightM + 45 * FT_TO_M;
-    return {
-      key,
-      kind: 'mast-raising',
-      level: distanceM < requiredM ? 'blocked' : 'needs-review',
-      distanceM,
-      requiredM,
-      rule,
-      source: OSHA_TABLE_A_SOURCE,
-      message: `Power line ${line.id} is recorded above 1000 kV: Table A leaves the distance to the utility; ask them before raising mast ${mast.supportId}.`,
-      caution: SAFETY_CAUTION,
-    };
+    return { distanceM, tableM, requiredM, level: (distanceM < requiredM ? 'blocked' : 'needs-review') as ClearanceLevel };
   }
   const requiredM = mast.heightM + tableM;
   let level = levelForDistance(distanceM, requiredM, opts.reviewMarginFraction);
-  const unknownVoltage = line.voltageKv === undefined;
   // Without a voltage the row cannot be chosen; the widest row up to 1000 kV is used and a person confirms it.
-  if (unknownVoltage && level === 'clear') level = 'needs-review';
-  const voltageText = unknownVoltage
-    ? 'voltage not recorded, planned as a transmission line (45 ft row); confirm the voltage with the utility'
-    : `${line.voltageKv} kV needs ${fmtM(tableM)}`;
-  return {
-    key,
-    kind: 'mast-raising',
+  if (line.voltageKv === undefined && level === 'clear') level = 'needs-review';
+  return { distanceM, tableM, requiredM, level };
+}
+
+/** OSHA Table A while raising a mast: the mast's height plus the table distance for the line's voltage. */
+export function mastRaisingClearance(mast: FootprintSupport, line: RecordedHazard, opts: ClearanceOptions): Clearance {
+  const { distanceM, tableM, requiredM, level } = mastRaisingCore(mast, line, opts);
+  const base = {
+    key: `mast-raising:${mast.supportId}:${line.id}`,
+    kind: 'mast-raising' as const,
     level,
     distanceM,
     requiredM,
-    rule,
+    rule: 'raising a mast: mast height plus the Table A distance for the line voltage',
     source: OSHA_TABLE_A_SOURCE,
+    caution: SAFETY_CAUTION,
+  };
+  if (tableM === null) {
+    return {
+      ...base,
+      message: `Power line ${line.id} is recorded above 1000 kV: Table A leaves the distance to the utility; ask them before raising mast ${mast.supportId}.`,
+    };
+  }
+  const voltageText =
+    line.voltageKv === undefined
+      ? 'voltage not recorded, planned as a transmission line (45 ft row); confirm the voltage with the utility'
+      : `${line.voltageKv} kV needs ${fmtM(tableM)}`;
+  return {
+    ...base,
     message:
       `Raising mast ${mast.supportId} (${fmtM(mast.heightM)}) ${fmtM(distanceM)} from power line ${line.id}: ` +
       `${voltageText}, ${fmtM(requiredM)} in all: ${verdict(level)}.`,
-    caution: SAFETY_CAUTION,
   };
+}
+
+/** Counts of results that are blocked or need review, for screening many candidates without messages. */
+export type LevelTally = { blocked: number; review: number };
+
+export function tallyLevel(t: LevelTally, level: ClearanceLevel): void {
+  if (level === 'blocked') t.blocked++;
+  else if (level === 'needs-review') t.review++;
+}
+
+/** The same levels powerLineClearances gives, counted without building the results. */
+export function tallyPowerLines(fp: AntennaFootprint, hazards: readonly RecordedHazard[], opts: ClearanceOptions, t: LevelTally): void {
+  for (const h of hazards) {
+    if (h.kind !== 'power-line') continue;
+    tallyLevel(t, fallCore(fp, h, opts).level);
+    for (const s of fp.supports) if (s.kind === 'mast') tallyLevel(t, mastRaisingCore(s, h, opts).level);
+  }
+}
+
+/** Adds one to counts[key] for each power-line result that blocks (keys as powerLineClearances gives them). */
+export function countBlockingLines(fp: AntennaFootprint, hazards: readonly RecordedHazard[], opts: ClearanceOptions, counts: Map<string, number>): void {
+  const bump = (k: string) => counts.set(k, (counts.get(k) ?? 0) + 1);
+  for (const h of hazards) {
+    if (h.kind !== 'power-line') continue;
+    if (fallCore(fp, h, opts).level === 'blocked') bump(`power-line:${h.id}`);
+    for (const s of fp.supports) if (s.kind === 'mast' && mastRaisingCore(s, h, opts).level === 'blocked') bump(`mast-raising:${s.supportId}:${h.id}`);
+  }
 }
 
 /** Every power-line result for one antenna: the fall check per line, and mast raising per mast and line. */

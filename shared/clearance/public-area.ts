@@ -25,17 +25,33 @@ function isPublic(kind: RecordedHazard['kind']): boolean {
  * Paths, roads and parking inside a fall zone or guy radius: never blocked (the zone can be roped off),
  * always reviewed, with the distance to rope off. Buildings inside a fall zone are reviewed as property.
  */
+function worstSupport(fp: AntennaFootprint, h: RecordedHazard) {
+  let worst: { s: FootprintSupport; distanceM: number; radiusM: number } | null = null;
+  for (const s of fp.supports) {
+    const distanceM = pointShapeDistanceM(s.at, h.shape);
+    const radiusM = ropeOffRadiusM(s, fp.swingReachM);
+    if (!worst || distanceM - radiusM < worst.distanceM - worst.radiusM) worst = { s, distanceM, radiusM };
+  }
+  return worst;
+}
+
+/** How many public areas and buildings lie inside a fall zone (each one a needs-review result). */
+export function countFallZoneOverlaps(fp: AntennaFootprint, hazards: readonly RecordedHazard[]): number {
+  let n = 0;
+  for (const h of hazards) {
+    if (!isPublic(h.kind) && h.kind !== 'building') continue;
+    const w = worstSupport(fp, h);
+    if (w && w.distanceM < w.radiusM) n++;
+  }
+  return n;
+}
+
 export function publicAreaClearances(fp: AntennaFootprint, hazards: readonly RecordedHazard[]): Clearance[] {
   const out: Clearance[] = [];
   for (const h of hazards) {
     const pub = isPublic(h.kind);
     if (!pub && h.kind !== 'building') continue;
-    let worst: { s: FootprintSupport; distanceM: number; radiusM: number } | null = null;
-    for (const s of fp.supports) {
-      const distanceM = pointShapeDistanceM(s.at, h.shape);
-      const radiusM = ropeOffRadiusM(s, fp.swingReachM);
-      if (!worst || distanceM - radiusM < worst.distanceM - worst.radiusM) worst = { s, distanceM, radiusM };
-    }
+    const worst = worstSupport(fp, h);
     if (!worst) continue;
     const inside = worst.distanceM < worst.radiusM;
     const what = pub ? `${h.kind} ${h.id}` : `building ${h.id}`;

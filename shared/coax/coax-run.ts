@@ -41,6 +41,65 @@ function lossKey(db: number | null): number {
   return db === null ? Infinity : db;
 }
 
+type Way = { pieces: CoaxPiece[]; lengthM: number; matchedDb: number | null };
+
+/**
+ * The club's inventory at one frequency, ordered once so that many runs can be matched quickly: total loss
+ * grows with matched loss at any SWR, so the lowest-matched-loss piece that reaches is the best one.
+ */
+export type CoaxChooser = {
+  /** Best single piece, else best two joined; null when nothing reaches. */
+  bestFor(runM: number): Way | null;
+  /** Cable types the club has (or common ones with no inventory), lowest loss per metre first. */
+  types: CoaxType[];
+};
+
+export function makeCoaxChooser(inventory: readonly CoaxPiece[], freqMhz: number): CoaxChooser {
+  const order = (a: Way, b: Way) => lossKey(a.matchedDb) - lossKey(b.matchedDb) || a.lengthM - b.lengthM;
+  const singles: Way[] = inventory.map((p) => ({ pieces: [p], lengthM: p.lengthM, matchedDb: matchedLossDb(p.type, freqMhz, p.lengthM) })).sort(order);
+  const pairs: Way[] = [];
+  for (let i = 0; i < inventory.length; i++) {
+    for (let j = i + 1; j < inventory.length; j++) {
+      const a = singles.find((w) => w.pieces[0] === inventory[i])!;
+      const b = singles.find((w) => w.pieces[0] === inventory[j])!;
+      const m = a.matchedDb === null || b.matchedDb === null ? null : a.matchedDb + b.matchedDb;
+      pairs.push({ pieces: [inventory[i], inventory[j]], lengthM: inventory[i].lengthM + inventory[j].lengthM, matchedDb: m });
+    }
+  }
+  pairs.sort(order);
+  const present = [...new Set(inventory.map((c) => c.type))];
+  const types = (present.length > 0 ? present : (['RG-213', 'RG-8X', 'RG-58'] as CoaxType[])).sort(
+    (a, b) => lossKey(matchedLossDb(a, freqMhz, 1)) - lossKey(matchedLossDb(b, freqMhz, 1)),
+  );
+  return {
+    bestFor: (runM) => singles.find((w) => w.lengthM >= runM) ?? pairs.find((w) => w.lengthM >= runM) ?? null,
+    types,
+  };
+}
+
+/** The operating position nearest the feed point and the run to it (ground route + drop + slack). */
+export function nearestRun(
+  feedAt: PlanePoint,
+  feedHeightM: number,
+  operatingPositions: readonly { id: string; at: PlanePoint }[],
+  opts: CoaxRunOptions,
+): { id: string; groundRouteM: number; slackM: number; runM: number } | null {
+  let nearest: { id: string; d: number } | null = null;
+  for (const p of operatingPositions) {
+    const d = planeDistanceM(feedAt, p.at);
+    if (!nearest || d < nearest.d) nearest = { id: p.id, d };
+  }
+  if (!nearest) return null;
+  const base = nearest.d + feedHeightM;
+  const slackM = Math.max(opts.minSlackM, base * opts.slackFraction);
+  return { id: nearest.id, groundRouteM: nearest.d, slackM, runM: base + slackM };
+}
+
+/** Total loss of a way at an SWR (null when a piece has no table row). */
+export function wayLossDb(way: Way, swr: number): number | null {
+  return way.matchedDb === null ? null : way.matchedDb + swrExtraLossDb(way.matchedDb, swr);
+}
+
 /** The nearest operating position to the feed point, and the run to it. Null when none is recorded. */
 export function planCoaxRun(args: {
   feedAt: PlanePoint;
@@ -50,52 +109,32 @@ export function planCoaxRun(args: {
   operatingPositions: readonly { id: string; at: PlanePoint }[];
   inventory: readonly CoaxPiece[];
   options?: CoaxRunOptions;
+  chooser?: CoaxChooser;
 }): CoaxRun | null {
   const opts = args.options ?? DEFAULT_COAX_RUN_OPTIONS;
-  let nearest: { id: string; d: number } | null = null;
-  for (const p of args.operatingPositions) {
-    const d = planeDistanceM(args.feedAt, p.at);
-    if (!nearest || d < nearest.d) nearest = { id: p.id, d };
-  }
-  if (!nearest) return null;
-  const base = nearest.d + args.feedHeightM;
-  const slackM = Math.max(opts.minSlackM, base * opts.slackFraction);
-  const runM = base + slackM;
-  const types = [...new Set(args.inventory.map((c) => c.type))];
-  const lossTypes: CoaxType[] = types.length > 0 ? types : ['RG-213', 'RG-8X', 'RG-58'];
-  const lossByType = lossTypes.map((t) => lossOf(t, args.freqMhz, runM, args.swr)).sort((a, b) => lossKey(a.totalDb) - lossKey(b.totalDb));
-  const pieceLoss = (p: CoaxPiece) => lossOf(p.type, args.freqMhz, p.lengthM, args.swr).totalDb;
+  const run = nearestRun(args.feedAt, args.feedHeightM, args.operatingPositions, opts);
+  if (!run) return null;
+  const chooser = args.chooser ?? makeCoaxChooser(args.inventory, args.freqMhz);
+  const lossByType = chooser.types.map((t) => lossOf(t, args.freqMhz, run.runM, args.swr));
   const reaching = args.inventory
-    .filter((p) => p.lengthM >= runM)
-    .map((p) => ({ p, db: pieceLoss(p) }))
+    .filter((p) => p.lengthM >= run.runM)
+    .map((p) => ({ p, db: lossOf(p.type, args.freqMhz, p.lengthM, args.swr).totalDb }))
     .sort((a, b) => lossKey(a.db) - lossKey(b.db) || a.p.lengthM - b.p.lengthM);
-  let best: CoaxRun['best'] = null;
-  if (reaching.length > 0) {
-    const r = reaching[0];
-    best = { pieceIds: [r.p.id], type: r.p.type, lengthM: r.p.lengthM, totalDb: r.db };
-  } else {
-    // Two pieces joined with a barrel connector (connector loss is negligible at HF).
-    for (let i = 0; i < args.inventory.length; i++) {
-      for (let j = i + 1; j < args.inventory.length; j++) {
-        const a = args.inventory[i];
-        const b = args.inventory[j];
-        if (a.lengthM + b.lengthM < runM) continue;
-        const la = lossOf(a.type, args.freqMhz, a.lengthM, 1).matchedDb;
-        const lb = lossOf(b.type, args.freqMhz, b.lengthM, 1).matchedDb;
-        const matched = la === null || lb === null ? null : la + lb;
-        const totalDb = matched === null ? null : matched + swrExtraLossDb(matched, args.swr);
-        if (!best || lossKey(totalDb) < lossKey(best.totalDb)) {
-          best = { pieceIds: [a.id, b.id], type: a.type === b.type ? a.type : `${a.type}+${b.type}`, lengthM: a.lengthM + b.lengthM, totalDb };
-        }
+  const way = chooser.bestFor(run.runM);
+  const best: CoaxRun['best'] = way
+    ? {
+        pieceIds: way.pieces.map((p) => p.id),
+        type: [...new Set(way.pieces.map((p) => p.type))].join('+'),
+        lengthM: way.lengthM,
+        totalDb: wayLossDb(way, args.swr),
       }
-    }
-  }
+    : null;
   return {
-    operatingPositionId: nearest.id,
-    groundRouteM: nearest.d,
+    operatingPositionId: run.id,
+    groundRouteM: run.groundRouteM,
     dropM: args.feedHeightM,
-    slackM,
-    runM,
+    slackM: run.slackM,
+    runM: run.runM,
     lossByType,
     reachingPieceIds: reaching.map((r) => r.p.id),
     best,

@@ -34,6 +34,36 @@ function wireDistanceToPointM(wire: ExposureCheckInput['wire'], p: PlanePoint): 
   return best;
 }
 
+/** Each public area checked with the gain toward it; the one with the least margin. */
+function worstPublicArea(input: ExposureCheckInput, peakUncontrolledM: number) {
+  let worst: { id: string; kind: string; distanceM: number; requiredM: number; gainDbi: number } | null = null;
+  for (const area of input.publicAreas) {
+    const distanceM = wireDistanceToShapeM(input.wire, area.shape);
+    const gainDbi =
+      input.gainTowardDbi && input.centre ? input.gainTowardDbi(closestPointOnShape(input.centre, area.shape)) : input.gainDbi;
+    // R grows as the square root of EIRP: 10^(ΔG/20) from the distance at peak gain.
+    const requiredM = peakUncontrolledM * 10 ** ((gainDbi - input.gainDbi) / 20);
+    if (!worst || distanceM - requiredM < worst.distanceM - worst.requiredM) worst = { id: area.id, kind: area.kind, distanceM, requiredM, gainDbi };
+  }
+  return worst;
+}
+
+function nearestOperator(input: ExposureCheckInput) {
+  let op: { id: string; distanceM: number } | null = null;
+  for (const p of input.operatingPositions) {
+    const distanceM = wireDistanceToPointM(input.wire, p.at);
+    if (!op || distanceM < op.distanceM) op = { id: p.id, distanceM };
+  }
+  return op;
+}
+
+/** How many of exposureCheck's results need review, without building them (for screening candidates). */
+export function countExposureReviews(input: ExposureCheckInput, distances: ExposureDistances): number {
+  const worst = worstPublicArea(input, distances.distanceM.uncontrolled);
+  const op = nearestOperator(input);
+  return (worst === null || worst.distanceM < worst.requiredM ? 1 : 0) + (op !== null && op.distanceM < distances.distanceM.controlled ? 1 : 0);
+}
+
 /**
  * RF exposure for one antenna: the public (uncontrolled limit) must be outside the uncontrolled distance
  * from the wire, the operators (controlled limit) outside the controlled one. Horizontal distance from the
@@ -47,18 +77,7 @@ export function exposureCheck(input: ExposureCheckInput): ExposureResult {
     `${d.averagePowerW.toFixed(0)} W average (duty ${Math.round(input.dutyFactor * 100)} %), ${input.gainDbi.toFixed(1)} dBi ` +
     `${input.gainNote} at ${input.freqMhz.toFixed(2)} MHz`;
   const results: Clearance[] = [];
-  // Each area is checked with the gain toward it; the area with the least margin is reported.
-  let nearest: { id: string; kind: string; distanceM: number; requiredM: number; gainDbi: number } | null = null;
-  for (const area of input.publicAreas) {
-    const distanceM = wireDistanceToShapeM(input.wire, area.shape);
-    const gainDbi =
-      input.gainTowardDbi && input.centre ? input.gainTowardDbi(closestPointOnShape(input.centre, area.shape)) : input.gainDbi;
-    const requiredM =
-      gainDbi === input.gainDbi ? uM : exposureDistances({ ...input, gainDbi }).distanceM.uncontrolled;
-    if (!nearest || distanceM - requiredM < nearest.distanceM - nearest.requiredM) {
-      nearest = { id: area.id, kind: area.kind, distanceM, requiredM, gainDbi };
-    }
-  }
+  const nearest = worstPublicArea(input, uM);
   const rule = 'the public stays outside the uncontrolled-exposure distance from the wire';
   if (!nearest) {
     results.push({
@@ -90,11 +109,7 @@ export function exposureCheck(input: ExposureCheckInput): ExposureResult {
       caution: SAFETY_CAUTION,
     });
   }
-  let op: { id: string; distanceM: number } | null = null;
-  for (const p of input.operatingPositions) {
-    const distanceM = wireDistanceToPointM(input.wire, p.at);
-    if (!op || distanceM < op.distanceM) op = { id: p.id, distanceM };
-  }
+  const op = nearestOperator(input);
   if (op) {
     const inside = op.distanceM < cM;
     results.push({

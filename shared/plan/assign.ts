@@ -7,7 +7,8 @@
 export type AssignOption = { id: string; needKey: string; score: number; supportIds: readonly string[] };
 export type PairVerdict = { allowed: boolean; penalty: number };
 export type AssignProblem = {
-  needs: { key: string; options: AssignOption[] }[];
+  /** Needs with a higher priority are decided first (the planner puts the longest wavelengths first). */
+  needs: { key: string; options: AssignOption[]; priority?: number }[];
   maxEnds: (supportId: string) => number;
   /** Whether two options of different antennas may be used together, and the score penalty (≤ 0) if so. */
   pair: (a: AssignOption, b: AssignOption) => PairVerdict;
@@ -122,21 +123,61 @@ export function solveHeuristic(problem: AssignProblem, maxRounds = 4): AssignSol
   return { choice, total, exact: false, method: 'greedy-local', nodes };
 }
 
-/** Branch and bound over every option of every need, seeded with the heuristic's answer. */
+/**
+ * Branch and bound over every option of every need, seeded with the heuristic's answer. The bound at each
+ * node is the current total plus, for every need still open, its best option that fits the supports and
+ * the pair rules against what is already chosen (forward checking); pair penalties are ≤ 0 and interactions
+ * among the open needs are ignored, so the bound never underestimates and the answer stays exact.
+ */
 export function solveExact(problem: AssignProblem, maxNodes: number): AssignSolution {
   for (const need of problem.needs) need.options.sort(byScore);
+  // A good first answer makes the bound bite: the greedy answer, improved by an exact search over each
+  // need's best few options; then the full search over every option starts from it.
+  const greedy = solveHeuristic(problem);
+  const few: AssignProblem = { ...problem, needs: problem.needs.map((nd) => ({ ...nd, options: nd.options.slice(0, 24) })) };
+  const start = branchAndBound(few, Math.floor(maxNodes / 4), greedy);
+  const seed = start.total > greedy.total ? start : greedy;
+  const full = branchAndBound(problem, maxNodes - start.nodes, seed);
+  return { ...full, nodes: full.nodes + start.nodes + greedy.nodes };
+}
+
+function branchAndBound(problem: AssignProblem, maxNodes: number, seed: AssignSolution): AssignSolution {
   const n = problem.needs.length;
-  const order = [...problem.needs.keys()].sort((a, b) => problem.needs[a].options.length - problem.needs[b].options.length || a - b);
-  const bestOf = order.map((i) => Math.max(UNASSIGNED_SCORE, problem.needs[i].options[0]?.score ?? -Infinity));
-  const suffix = new Array<number>(n + 1).fill(0);
-  for (let k = n - 1; k >= 0; k--) suffix[k] = suffix[k + 1] + bestOf[k];
-  const seed = solveHeuristic(problem);
+  const order = [...problem.needs.keys()].sort(
+    (a, b) =>
+      (problem.needs[b].priority ?? 0) - (problem.needs[a].priority ?? 0) ||
+      problem.needs[a].options.length - problem.needs[b].options.length ||
+      a - b,
+  );
   let best = seed.total;
   let bestChoice = seed.choice.slice();
   const state = new State(problem);
   const chosen: (AssignOption | null)[] = new Array(n).fill(null); // by order position
   let nodes = 0;
   let aborted = false;
+  const compatible = (o: AssignOption, k: number): boolean => {
+    if (!state.fits(o)) return false;
+    for (let j = 0; j < k; j++) {
+      const c = chosen[j];
+      if (c && !problem.pair(c, o).allowed) return false;
+    }
+    return true;
+  };
+  const openBound = (k: number): number => {
+    let sum = 0;
+    for (let m = k; m < n; m++) {
+      let b = UNASSIGNED_SCORE;
+      for (const o of problem.needs[order[m]].options) {
+        if (o.score <= b) break;
+        if (compatible(o, k)) {
+          b = o.score;
+          break;
+        }
+      }
+      sum += b;
+    }
+    return sum;
+  };
   const record = (total: number) => {
     best = total;
     bestChoice = new Array(n).fill(null);
@@ -152,23 +193,24 @@ export function solveExact(problem: AssignProblem, maxNodes: number): AssignSolu
       if (total > best + EPS) record(total);
       return;
     }
-    if (total + suffix[k] <= best + EPS) return;
+    const rest = openBound(k + 1);
+    if (total + Math.max(UNASSIGNED_SCORE, problem.needs[order[k]].options[0]?.score ?? UNASSIGNED_SCORE) + rest <= best + EPS) return;
     for (const o of problem.needs[order[k]].options) {
-      if (total + o.score + suffix[k + 1] <= best + EPS) break;
+      if (total + o.score + rest <= best + EPS) break;
       if (!state.fits(o)) continue;
       const penalty = state.pairPenalty(o, chosen.slice(0, k));
       if (penalty === null) continue;
       state.add(o, 1);
       chosen[k] = o;
-      dfs(k + 1, total + o.score + penalty);
+      if (total + o.score + penalty + openBound(k + 1) > best + EPS) dfs(k + 1, total + o.score + penalty);
       chosen[k] = null;
       state.add(o, -1);
       if (aborted) return;
     }
-    if (total + UNASSIGNED_SCORE + suffix[k + 1] > best + EPS) dfs(k + 1, total + UNASSIGNED_SCORE);
+    if (total + UNASSIGNED_SCORE + rest > best + EPS) dfs(k + 1, total + UNASSIGNED_SCORE);
   };
   dfs(0, 0);
-  return { choice: bestChoice, total: best, exact: !aborted, method: 'branch-and-bound', nodes: nodes + seed.nodes };
+  return { choice: bestChoice, total: best, exact: !aborted, method: 'branch-and-bound', nodes };
 }
 
 /** Every combination: the check the exact solver is tested against (small problems only). */

@@ -2,7 +2,7 @@ import { BANDS, type BandName } from '../bands';
 import { SAFETY_CAUTION } from '../clearance/cautions';
 import { type PlanePoint, planeBearingDeg, planeDistanceM } from '../clearance/planar';
 import type { Clearance } from '../clearance/types';
-import { wavelengthM as wavelengthAtM } from '../ground';
+import { SPEED_OF_LIGHT_M_PER_US, wavelengthM as wavelengthAtM } from '../ground';
 
 export type Orientation = 'end-to-end' | 'side-by-side' | 'parallel-offset' | 'crossed' | 'oblique';
 
@@ -59,10 +59,44 @@ function orientationOf(a: SeparatedAntenna, b: SeparatedAntenna): Orientation {
   return 'parallel-offset';
 }
 
+function harmonicText(lower: BandName, higher: BandName): string | null {
+  if (lower === higher) return 'same band';
+  const n = harmonicRelation(lower, higher);
+  return n ? `${lower} × ${n} falls in ${higher}` : null;
+}
+
+/**
+ * The level alone, for the assignment's many pair checks: closer than minWavelengths of the lower band is
+ * blocked; closer than reviewWavelengths on the same band or harmonically related needs review; otherwise
+ * clear. It depends only on the feed points and the bands (orientation is reported, with the isolation, but
+ * does not change the level), which lets the assignment keep one leg direction per inverted-V support.
+ */
+export function pairLevel(a: SeparatedAntenna, b: SeparatedAntenna, minWavelengths: number, reviewWavelengths: number): Clearance['level'] {
+  const lower = a.freqMhz <= b.freqMhz ? a : b;
+  const higher = lower === a ? b : a;
+  const dE = a.feed.eastM - b.feed.eastM;
+  const dN = a.feed.northM - b.feed.northM;
+  const wavelengths = (Math.sqrt(dE * dE + dN * dN) * lower.freqMhz) / SPEED_OF_LIGHT_M_PER_US;
+  if (wavelengths < minWavelengths) return 'blocked';
+  if (wavelengths >= reviewWavelengths) return 'clear';
+  return related(lower.band, higher.band) ? 'needs-review' : 'clear';
+}
+
+const relatedCache = new Map<string, boolean>();
+function related(lower: BandName, higher: BandName): boolean {
+  const key = lower + higher;
+  let r = relatedCache.get(key);
+  if (r === undefined) {
+    r = harmonicText(lower, higher) !== null;
+    relatedCache.set(key, r);
+  }
+  return r;
+}
+
 /**
  * Separation between two stations' antennas, measured feed point to feed point in wavelengths of the lower
  * band. Closer than minWavelengths: the pair is not used together ("blocked" here means only that).
- * Closer than reviewWavelengths and on the same band, harmonically related or side by side: needs review.
+ * Closer than reviewWavelengths and on the same band or harmonically related: needs review.
  */
 export function separationBetween(
   a: SeparatedAntenna,
@@ -70,22 +104,19 @@ export function separationBetween(
   minWavelengths: number,
   reviewWavelengths: number,
 ): SeparationResult {
+  const level = pairLevel(a, b, minWavelengths, reviewWavelengths);
   const [lower, higher] = a.freqMhz <= b.freqMhz ? [a, b] : [b, a];
   const lambdaM = wavelengthAtM(lower.freqMhz);
   const distanceM = planeDistanceM(a.feed, b.feed);
   const wavelengths = distanceM / lambdaM;
   const orientation = orientationOf(a, b);
-  const n = lower.band === higher.band ? null : harmonicRelation(lower.band, higher.band);
-  const harmonic = lower.band === higher.band ? 'same band' : n ? `${lower.band} × ${n} falls in ${higher.band}` : null;
+  const harmonic = harmonicText(lower.band, higher.band);
   // Friis path loss minus both antennas' gains toward each other, at each station's frequency; the worse is kept.
   const ga = gainToward(a, b.feed);
   const gb = gainToward(b, a.feed);
   const isolationDb = Math.min(
     ...[a.freqMhz, b.freqMhz].map((f) => 20 * Math.log10((4 * Math.PI * Math.max(distanceM, 0.1)) / wavelengthAtM(f)) - ga - gb),
   );
-  let level: Clearance['level'] = 'clear';
-  if (wavelengths < minWavelengths) level = 'blocked';
-  else if (wavelengths < reviewWavelengths && (harmonic !== null || orientation === 'side-by-side')) level = 'needs-review';
   const requiredM = minWavelengths * lambdaM;
   const what = `${a.needKey} and ${b.needKey}: ${distanceM.toFixed(1)} m apart (${wavelengths.toFixed(2)} λ at ${lower.band}), ${orientation}`;
   const message =
@@ -98,7 +129,7 @@ export function separationBetween(
     level,
     distanceM,
     requiredM,
-    rule: `feed points at least ${minWavelengths} λ of the lower band apart; review under ${reviewWavelengths} λ when related or side by side`,
+    rule: `feed points at least ${minWavelengths} λ of the lower band apart; review under ${reviewWavelengths} λ on the same band or harmonically related`,
     source: SEPARATION_SOURCE,
     message,
     caution: SAFETY_CAUTION,

@@ -8,7 +8,7 @@ import {
   exposureDistances,
   mpeLimitMwPerCm2,
 } from '../../shared/exposure';
-import { SAFETY_CAUTION } from '../../shared/clearance';
+import { type PlanePoint, SAFETY_CAUTION } from '../../shared/clearance';
 
 const FT = 0.3048;
 
@@ -71,8 +71,8 @@ describe('OET Bulletin 65 Supplement B far-field estimate with ground reflection
 });
 
 describe('exposure check around a wire', () => {
-  const wire = [[{ eastM: -10, northM: 0 }, { eastM: 10, northM: 0 }]] as const;
-  const base = { freqMhz: 28.5, powerW: 1500, dutyFactor: 1, transmitFraction: 1, gainDbi: 8, gainNote: 'peak', wire: [...wire] };
+  const wire: [PlanePoint, PlanePoint][] = [[{ eastM: -10, northM: 0 }, { eastM: 10, northM: 0 }]];
+  const base = { freqMhz: 28.5, powerW: 1500, dutyFactor: 1, transmitFraction: 1, gainDbi: 8, gainNote: 'peak', wire };
   it('a path inside the public distance needs review; outside it is clear; every result carries the caution (47 CFR 1.1310)', () => {
     const u = exposureDistances(base).distanceM.uncontrolled;
     const path = (n: number) => ({ id: 'P1', kind: 'path', shape: { points: [{ eastM: -50, northM: n }, { eastM: 50, northM: n }], closed: false } });
