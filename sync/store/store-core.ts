@@ -129,11 +129,14 @@ export function createStoreFromTx(run: RunTx, close: () => Promise<void>): Local
           byRecord.set(key, [...(byRecord.get(key) ?? []), e]);
         }
         const seen = new Set<string>();
+        // Queue every put before waiting: one round through the database instead of one per record.
+        const puts: Promise<void>[] = [];
         for (const rec of page.records) {
           const key = `${rec.collection}/${rec.id}`;
           seen.add(key);
-          await tx.putRecord({ collection: rec.collection, id: rec.id, base: rec, view: materialize(rec, byRecord.get(key) ?? [], rec.clubId) });
+          puts.push(tx.putRecord({ collection: rec.collection, id: rec.id, base: rec, view: materialize(rec, byRecord.get(key) ?? [], rec.clubId) }));
         }
+        await Promise.all(puts);
         for (const e of dropAcked) {
           const key = `${e.collection}/${e.recordId}`;
           if (seen.has(key)) continue;
