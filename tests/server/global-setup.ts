@@ -26,6 +26,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   const root = mkdtempSync(join(tmpdir(), 'loftline-test-pg-'));
   chmodSync(root, 0o755); // mkdtemp makes it 0700; the postgres OS user must be able to enter it
   const cluster = await startCluster({ dataDir: join(root, 'data') });
+  cluster.stopWhenGone(process.pid, [cluster.dataDir, root]); // a run killed before teardown leaves no server behind
   try {
     await cluster.ensureDatabase(TEMPLATE_DB);
     const ds = createDataSource({ url: cluster.url(TEMPLATE_DB), poolSize: 1 });

@@ -58,3 +58,26 @@ describe('pg-cluster', () => {
     expect(await c2.ensureDatabase('kept')).toBe(false);
   });
 });
+
+describe('pg-cluster watcher', () => {
+  it('stops the cluster and removes its folders once the watched process is gone', async () => {
+    const { spawn } = await import('node:child_process');
+    const { existsSync } = await import('node:fs');
+    const sleeper = spawn('sleep', ['600'], { stdio: 'ignore' });
+    const dir = join(root, 'watched');
+    const c = await startCluster({ dataDir: dir });
+    c.stopWhenGone(sleeper.pid as number, [c.dataDir]);
+    const client = new Client({ connectionString: c.url('postgres') });
+    await client.connect();
+    await client.end();
+    sleeper.kill();
+    let gone = false;
+    for (let i = 0; i < 60 && !gone; i++) {
+      await new Promise((ok) => setTimeout(ok, 500));
+      gone = !existsSync(c.dataDir);
+    }
+    expect(gone).toBe(true);
+    const late = new Client({ connectionString: c.url('postgres'), connectionTimeoutMillis: 2000 });
+    await expect(late.connect()).rejects.toThrow();
+  });
+});

@@ -3,7 +3,7 @@
 // `postgres` OS user (runuser), in a data folder that user owns. That user must be able to enter every parent
 // folder of the data folder; a checkout under a private folder (e.g. /root) cannot host it, so we fall back to
 // a folder under /tmp whose name is derived from the requested path (the same path finds the same data again).
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -27,7 +27,17 @@ export interface PgCluster {
   ensureDatabase(name: string, template?: string): Promise<boolean>;
   dropDatabase(name: string): Promise<void>;
   stop(): Promise<void>;
+  /**
+   * Starts a small detached watcher that stops the cluster (and removes `removeDirs`) once process `pid` is gone,
+   * so a test run killed before its teardown leaves no server behind. Harmless after a normal stop.
+   */
+  stopWhenGone(pid: number, removeDirs?: string[]): void;
 }
+
+const WATCHER = `pid=$1; data=$2; pgctl=$3; asroot=$4; shift 4
+while kill -0 "$pid" 2>/dev/null; do sleep 2; done
+if [ "$asroot" = 1 ]; then runuser -u postgres -- "$pgctl" -D "$data" -m fast -w stop; else "$pgctl" -D "$data" -m fast -w stop; fi >/dev/null 2>&1
+for d in "$@"; do rm -rf -- "$d"; done`;
 
 const isRoot = () => typeof process.getuid === 'function' && process.getuid() === 0;
 
@@ -204,6 +214,10 @@ export async function startCluster(opts: StartClusterOptions): Promise<PgCluster
     url,
     ensureDatabase: (name, template) => ensureDatabase(url('postgres'), name, template),
     dropDatabase: (name) => dropDatabase(url('postgres'), name),
+    stopWhenGone(pid, removeDirs = []) {
+      const args = ['-c', WATCHER, 'loftline-pg-watch', String(pid), dataDir, join(binDir, 'pg_ctl'), isRoot() ? '1' : '0', ...removeDirs];
+      spawn('sh', args, { detached: true, stdio: 'ignore', cwd: '/' }).unref();
+    },
     async stop() {
       if (stopped) return;
       stopped = true;
