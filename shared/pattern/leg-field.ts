@@ -100,7 +100,6 @@ export function dipoleImpedancesFast(
 ): { self: [number, number]; image: [number, number] } {
   const selfSrc: LegSource[] = [source(legs[0], 1, k, H), source(legs[1], 1, k, H)];
   const imgSrc: LegSource[] = withImage ? [source(mirrorLeg(legs[0]), -1, k, H), source(mirrorLeg(legs[1]), -1, k, H)] : [];
-  const a2 = radiusM * radiusM;
   const out = new Float64Array(2);
   let sr = 0, si = 0, ir = 0, ii = 0;
   const obsLegs = symmetric ? [legs[0]] : [legs[0], legs[1]];

@@ -1,6 +1,6 @@
 import { complexPermittivity, csqrt, wavelengthM } from '../ground';
 import { dipoleGeometry, type Leg } from './geometry';
-import { defaultOrders, dipoleImpedances, ETA0_OHM, mirrorLeg } from './induced-emf';
+import { defaultOrders, dipoleImpedances, ETA0_OHM } from './induced-emf';
 import { dipoleImpedancesFast } from './leg-field';
 import type { DipoleInput } from './types';
 
@@ -20,7 +20,6 @@ export type PreparedDipole = {
   lambdaM: number;
   H: number;
   legs: [Leg, Leg];
-  images: [Leg, Leg];
   ground: DipoleInput['ground']['kind'];
   epsRe: number;
   epsIm: number;
@@ -85,7 +84,6 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1, method: '
     lambdaM,
     H,
     legs: g.legs,
-    images: [mirrorLeg(l1), mirrorLeg(l2)],
     ground: kind,
     epsRe,
     epsIm,
@@ -109,15 +107,15 @@ export function prepareDipole(input: DipoleInput, quadratureScale = 1, method: '
  *   a1 = k(q − 1)ℓ/2, a2 = k(q + 1)ℓ/2 = a1 + kℓ
  * (sin written as two exponentials; sinc keeps the end-fire limit finite). The wire lies in the x–z plane
  * with the feed at (0, 0, h), so t_y = 0 and e^{jk r̂·p} = e^{jkh sinΔ} (its conjugate for the image).
- * Written out with scalars: this runs ~10⁴ times per summary.
+ * Written out with scalars: it runs for every direction of every summary (and 33 000 times per reference).
  */
 
 let accRe = 0;
 let accIm = 0;
 
 /**
- * Leg integral into (accRe, accIm) for phase factor (e0r, e0i) = e^{jk r̂·p}, given c1 + j·s1 = e^{j·a1}.
- * (ckh, skh) = e^{jkH} and (ckl, skl) = e^{jkℓ}; here ℓ = H. Hot path: scalars only.
+ * Leg integral into (accRe, accIm) for phase factor (e0r, e0i) = e^{jk r̂·p}, given c1 + j·s1 = e^{j·a1},
+ * (ckh, skh) = e^{jkH} and kl = kℓ; every leg is half the wire, so ℓ = H and e^{jkℓ} = e^{jkH}. Scalars only.
  */
 function legIntegral(kl: number, l: number, a1: number, c1: number, s1: number, e0r: number, e0i: number, ckh: number, skh: number): void {
   const c2 = c1 * ckh - s1 * skh;
