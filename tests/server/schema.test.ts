@@ -53,6 +53,34 @@ describe('synced tables', () => {
     expect(after.fieldClocks).toEqual({});
   });
 
+  it('a second writer waits for the first to commit, so change_seq order is commit order (the advisory lock)', async () => {
+    const ds = t.deps.dataSource;
+    const [club] = await ds.query(`INSERT INTO clubs (name) VALUES ('Lock club') RETURNING id`);
+    const first = ds.createQueryRunner();
+    const second = ds.createQueryRunner();
+    await first.connect();
+    await second.connect();
+    try {
+      await first.startTransaction();
+      await second.startTransaction();
+      await first.query(`INSERT INTO coax (id, club_id, label, type, length_m, notes) VALUES (gen_random_uuid(), $1, 'first', 'RG-58', 5, '')`, [club.id]);
+      let secondDone = false;
+      const secondWrite = second
+        .query(`INSERT INTO coax (id, club_id, label, type, length_m, notes) VALUES (gen_random_uuid(), $1, 'second', 'RG-58', 5, '')`, [club.id])
+        .then(() => (secondDone = true));
+      await new Promise((ok) => setTimeout(ok, 300));
+      expect(secondDone).toBe(false); // blocked on the lock the first writer holds until it commits
+      await first.commitTransaction();
+      await secondWrite;
+      await second.commitTransaction();
+    } finally {
+      await first.release();
+      await second.release();
+    }
+    const rows: { label: string; change_seq: number }[] = await ds.query(`SELECT label, change_seq FROM coax WHERE club_id = $1 ORDER BY change_seq`, [club.id]);
+    expect(rows.map((r) => r.label)).toEqual(['first', 'second']);
+  });
+
   it('reads instants inside fields as ISO strings and dates as YYYY-MM-DD, as the zod schemas describe them', async () => {
     const ds = t.deps.dataSource;
     const [club] = await ds.query(`INSERT INTO clubs (name) VALUES ('Types club') RETURNING id`);

@@ -23,7 +23,6 @@ export interface ClubMembership {
 }
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     // passport's Request.user is an (empty) Express.User: give it our shape.
     interface User extends AuthUser {}
