@@ -48,4 +48,11 @@ describe('server skeleton', () => {
     expect(me.status).toBe(200);
     expect(me.body.clubs).toEqual([expect.objectContaining({ id: u.clubId, role: 'scout' })]);
   });
+
+  it('GET /api/health answers 503 {ok: false, db: down} when the database is gone (run last: it closes the pool)', async () => {
+    await t.deps.dataSource.destroy();
+    const r = await t.api('GET', '/api/health');
+    expect(r.status).toBe(503);
+    expect(r.body).toEqual({ ok: false, db: 'down' });
+  });
 });

@@ -147,7 +147,7 @@ export async function startTestApp(opts: TestAppOptions = {}): Promise<TestApp> 
       closed = true;
       server.closeAllConnections();
       await new Promise<void>((ok) => server.close(() => ok()));
-      await dataSource.destroy();
+      if (dataSource.isInitialized) await dataSource.destroy();
       await dropDatabase(`${pg.baseUrl}postgres`, database);
     },
   };
