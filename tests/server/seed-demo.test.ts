@@ -1,0 +1,51 @@
+// The demo scenario (contracts.md "Demo scenario"): seeded through the API's services, idempotent, and every
+// record valid against the shared zod schemas.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { COLLECTIONS, type CollectionName } from '../../shared/schemas';
+import { demoEventDays } from '../../server/src/dev/demo-scenario';
+import { seedDemo } from '../../server/src/dev/seed-demo';
+import { SYNCED_ENTITIES } from '../../server/src/db/entities';
+import { startTestApp, type TestApp } from './helpers/test-app';
+
+const SEEDED: CollectionName[] = ['sites', 'events', 'supports', 'hazards', 'operatingPositions', 'stations', 'coax'];
+
+describe('seedDemo', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(() => t.close());
+
+  it('a second run creates nothing and changes no count', async () => {
+    const first = await seedDemo(t.deps);
+    expect(first.created).toBe(true);
+    const count = async () => Promise.all(['users', 'clubs', 'memberships', 'sites', 'events', 'supports', 'hazards', 'stations'].map(async (tb) => (await t.deps.dataSource.query(`SELECT count(*)::int AS n FROM ${tb}`))[0].n));
+    const before = await count();
+    const second = await seedDemo(t.deps);
+    expect(second).toEqual({ ...first, created: false });
+    expect(await count()).toEqual(before);
+  });
+
+  it.each(SEEDED)('every seeded %s record passes its shared zod field schema', async (c) => {
+    const rows = await t.deps.dataSource.getRepository(SYNCED_ENTITIES[c]).find();
+    expect(rows.length).toBeGreaterThan(0);
+    const shape = (COLLECTIONS[c].fields as unknown as { shape: Record<string, unknown> }).shape;
+    for (const row of rows) {
+      const fields = Object.fromEntries(Object.keys(shape).map((k) => [k, (row as Record<string, unknown>)[k]]));
+      const r = COLLECTIONS[c].fields.safeParse(fields);
+      expect(r.success, `${c} ${row.id}: ${r.success ? '' : r.error.message}`).toBe(true);
+    }
+  });
+
+  it('every field of a seeded record carries a clock, so phones merge later edits field by field', async () => {
+    const support = (await t.deps.dataSource.getRepository(SYNCED_ENTITIES.supports).find())[0];
+    const shape = (COLLECTIONS.supports.fields as unknown as { shape: Record<string, unknown> }).shape;
+    expect(Object.keys(support.fieldClocks).sort()).toEqual(Object.keys(shape).sort());
+  });
+
+  it('the outing starts on the first Saturday at least three weeks out and lasts two days', () => {
+    expect(demoEventDays(new Date('2026-12-01T12:00:00Z'))).toEqual({ startsOn: '2026-12-26', endsOn: '2026-12-27' });
+    expect(demoEventDays(new Date('2026-12-05T12:00:00Z'))).toEqual({ startsOn: '2026-12-26', endsOn: '2026-12-27' });
+    expect(demoEventDays(new Date('2026-12-06T12:00:00Z'))).toEqual({ startsOn: '2027-01-02', endsOn: '2027-01-03' });
+  });
+});
