@@ -81,7 +81,8 @@ export function powerLineFallClearance(fp: AntennaFootprint, line: RecordedHazar
     source: T0B06_SOURCE,
     message:
       `Power line ${line.id} is ${fmtM(c.distanceM)} from ${c.support.kind} ${c.support.supportId}; a fall reaches ` +
-      `${fmtM(c.reachM)} and the rule needs 10 ft more, ${fmtM(requiredM)} in all: ${verdict(level)}.`,
+      `${fmtM(c.reachM)} and the rule needs 10 ft more, ${fmtM(requiredM)} in all: ${verdict(level)}.` +
+      (line.heightM === undefined ? ' Line height not recorded: not needed, the check assumes the line could be at any height.' : ''),
     caution: SAFETY_CAUTION,
   };
 }

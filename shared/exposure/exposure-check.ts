@@ -61,7 +61,7 @@ function nearestOperator(input: ExposureCheckInput) {
 export function countExposureReviews(input: ExposureCheckInput, distances: ExposureDistances): number {
   const worst = worstPublicArea(input, distances.distanceM.uncontrolled);
   const op = nearestOperator(input);
-  return (worst === null || worst.distanceM < worst.requiredM ? 1 : 0) + (op !== null && op.distanceM < distances.distanceM.controlled ? 1 : 0);
+  return (worst === null || worst.distanceM < worst.requiredM ? 1 : 0) + (op === null || op.distanceM < distances.distanceM.controlled ? 1 : 0);
 }
 
 /**
@@ -123,6 +123,19 @@ export function exposureCheck(input: ExposureCheckInput): ExposureResult {
       message: inside
         ? `Operating position ${op.id} is ${fmtM(op.distanceM)} from the wire, inside the operators' distance ${fmtM(cM)} (${basis}).`
         : `Operating position ${op.id} is ${fmtM(op.distanceM)} from the wire, outside the operators' distance ${fmtM(cM)}.`,
+      caution: SAFETY_CAUTION,
+    });
+  }
+  if (!op) {
+    results.push({
+      key: 'rf-exposure:operators',
+      kind: 'rf-exposure',
+      level: 'needs-review',
+      distanceM: null,
+      requiredM: cM,
+      rule: 'operators stay outside the controlled-exposure distance from the wire',
+      source: SOURCE,
+      message: `No operating position is recorded, so the operators' distance cannot be checked: keep them ${fmtM(cM)} from the wire.`,
       caution: SAFETY_CAUTION,
     });
   }

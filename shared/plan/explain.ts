@@ -41,15 +41,16 @@ export function explainAntenna(
   });
   for (const s of best.supportIds) {
     const users = used.get(s) ?? [];
-    if (users.length + 1 > (maxEnds.get(s) ?? 1)) reasons.push(`support ${s} carries ${maxEnds.get(s) ?? 1} end(s) at most and ${users.join(', ')} uses it`);
+    if (users.length + 1 > (maxEnds.get(s) ?? 1)) reasons.push(`support ${s} carries at most ${maxEnds.get(s) ?? 1} end(s), taken by ${users.join(' and ')}`);
   }
   solution.choice.forEach((o, j) => {
     if (!o || j === i) return;
     const r = separation(best, o);
-    if (r.level === 'blocked') reasons.push(`its best spot is ${r.wavelengths.toFixed(2)} λ from ${o.needKey}'s antenna (needs ${(r.requiredM ?? 0).toFixed(1)} m)`);
+    if (r.level === 'blocked') reasons.push(`${r.wavelengths.toFixed(2)} λ from ${o.needKey} (needs ${(r.requiredM ?? 0).toFixed(1)} m)`);
   });
   const name = best.id.split('#')[1] ?? best.id;
-  if (reasons.length > 0) lines.push(`best spot ${name} (score ${best.score.toFixed(2)}) not used: ${reasons.join('; ')}`);
+  const more = reasons.length > 3 ? `; and ${reasons.length - 3} more` : '';
+  if (reasons.length > 0) lines.push(`best spot ${name} (score ${best.score.toFixed(2)}) not used: ${reasons.slice(0, 3).join('; ')}${more}`);
   else lines.push(`best spot ${name} (score ${best.score.toFixed(2)}) was given up for a higher total across all antennas`);
   if (!mine) lines.push('every usable spot conflicts with the other antennas: left without a spot');
   return lines;

@@ -47,6 +47,7 @@ function exposureReviews(geom: SpanGeometry, az: readonly number[], need: Antenn
     if (dist < uPeak * 10 ** ((g - peakGainDbi) / 20)) reviews = 1;
   }
   const cPeak = d.distanceM.controlled;
+  if (model.operatingPositions.length === 0) return reviews + 1; // cannot be checked
   for (const p of model.operatingPositions) {
     let dist = Infinity;
     for (const [a, b] of geom.wire) dist = Math.min(dist, pointSegmentDistanceM(p.at, a, b));

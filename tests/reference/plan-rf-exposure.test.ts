@@ -78,10 +78,19 @@ describe('exposure check around a wire', () => {
     const path = (n: number) => ({ id: 'P1', kind: 'path', shape: { points: [{ eastM: -50, northM: n }, { eastM: 50, northM: n }], closed: false } });
     const inside = exposureCheck({ ...base, publicAreas: [path(u - 0.1)], operatingPositions: [] });
     expect(inside.results[0].level).toBe('needs-review');
-    const outside = exposureCheck({ ...base, publicAreas: [path(u + 0.1)], operatingPositions: [] });
-    expect(outside.results[0].level).toBe('clear');
+    const outside = exposureCheck({ ...base, publicAreas: [path(u + 0.1)], operatingPositions: [{ id: 'OP', at: { eastM: 0, northM: -100 } }] });
+    expect(outside.results.map((r) => r.level)).toEqual(['clear', 'clear']);
     for (const r of [...inside.results, ...outside.results]) expect(r.caution).toBe(SAFETY_CAUTION);
   });
+  it('no recorded operating position is never called clear for the operators', () => {
+    const r = exposureCheck({ ...base, publicAreas: [], operatingPositions: [] });
+    expect(r.results.map((x) => [x.key, x.level])).toEqual([
+      ['rf-exposure:public', 'needs-review'],
+      ['rf-exposure:operators', 'needs-review'],
+    ]);
+    expect(r.results[1].message).toMatch(/No operating position is recorded/);
+  });
+
   it('no recorded public area is never called clear: needs review with the distance to keep', () => {
     const r = exposureCheck({ ...base, publicAreas: [], operatingPositions: [{ id: 'OP1', at: { eastM: 0, northM: 1 } }] });
     expect(r.results.map((x) => [x.key, x.level])).toEqual([
