@@ -15,7 +15,7 @@ import { modelNotes, OPERATOR_WINDOWS } from './windows';
  * 1° hemisphere grid (shared/pattern/reference.ts).
  */
 
-const ANGLE_TOL_DEG = 1e-3;
+const ANGLE_TOL_DEG = 0.005;
 
 export function broadsideGain(m: PreparedDipole, elevationDeg: number): number {
   const e = elevationDeg * DEG;
