@@ -68,6 +68,17 @@ describe('planSite on a generated park', { timeout: 120_000 }, () => {
     expect(() => planSite(site, { stationId: 'nobody' })).toThrow(/not in the site file/);
   });
 
+  it('beyond 8 antennas the heuristic places them all within the same rules', () => {
+    const many = { ...site, stations: site.stations.map((s, i) => ({ ...s, bands: i < 4 ? [s.bands[0], '6m' as const].slice(0, i % 2 ? 1 : 2) : s.bands })) };
+    many.stations.push({ id: 'extra-10', bands: ['10m', '12m'], powerW: 100, mode: 'cw' }, { id: 'extra-30', bands: ['30m'], powerW: 100, mode: 'cw' });
+    const r = planSite(many);
+    expect(r.assignment.spots.length).toBeGreaterThan(8);
+    expect(r.assignment.method).toBe('greedy-local');
+    expect(r.assignment.exact).toBe(false);
+    for (const sp of r.assignment.spots) if (sp.candidate) expect(sp.candidate.level).not.toBe('blocked');
+    for (const sep of r.assignment.separations) expect(sep.level).not.toBe('blocked');
+  });
+
   it('an unknown ground class is an error naming the field', () => {
     expect(() => planSite({ ...site, ground: 'swamp' })).toThrow(PlanInputError);
     expect(() => planSite({ ...site, ground: 'swamp' })).toThrow(/^ground: unknown ground class "swamp"/);

@@ -76,6 +76,12 @@ describe('site file v1 schema', () => {
     expect(r.ok).toBe(false);
   });
 
+  it('an unknown ground class names the field and the known classes', () => {
+    const r = parseSiteFile({ ...minimal(), ground: 'swamp' });
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.errors[0]).toMatch(/^ground: unknown ground class \(known: free-space, perfect, very-good, average/);
+  });
+
   it('bad JSON text is one clear line', () => {
     const r = parseSiteFile('{"version": 1,');
     expect(r.ok).toBe(false);

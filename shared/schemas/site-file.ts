@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { GROUND_CLASS_NAMES, isGroundClassName } from '../ground';
 import { latSchema, lonSchema } from './common';
 import { BAND_NAMES, COAX_TYPES, HAZARD_KINDS, MODES, PURPOSES, SUPPORT_KINDS } from './records';
 
@@ -19,10 +20,13 @@ const id = z
   .max(80, 'id must be at most 80 characters');
 const latLon = z.strictObject({ lat: latSchema, lon: lonSchema });
 
-/** A ground class name from shared/ground, or measured constants. Class names are checked by the planner. */
+/** A ground class name from shared/ground, or measured constants. */
 export const siteGroundSchema = z.union(
   [
-    z.string().trim().min(1, 'ground class name is required').max(60),
+    z
+      .string()
+      .trim()
+      .refine(isGroundClassName, { message: `unknown ground class (known: ${GROUND_CLASS_NAMES.join(', ')})` }),
     z.strictObject({
       sigmaSPerM: z.number().positive('conductivity must be above 0').max(10, 'conductivity above 10 S/m is not ground'),
       epsR: z.number().min(1, 'relative permittivity is at least 1').max(100, 'relative permittivity above 100 is not ground'),
