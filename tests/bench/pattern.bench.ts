@@ -47,6 +47,17 @@ function timePerCall(list: DipoleInput[], f: (i: DipoleInput) => PatternSummary)
   return { usPer: wall / list.length, cpuUsPer: (cpu.user + cpu.system) / list.length, results };
 }
 
+/** CPU ns per Math.sin + Math.cos pair: a yardstick for how busy or slow this machine is during the run. */
+function trigYardstickNs(): number {
+  const n = 2_000_000;
+  let acc = 0;
+  const c0 = process.cpuUsage();
+  for (let i = 0; i < n; i++) acc += Math.sin(i * 1e-3) + Math.cos(i * 1e-3);
+  const c = process.cpuUsage(c0);
+  if (acc === 42) console.log('');
+  return ((c.user + c.system) * 1000) / n;
+}
+
 export async function run(): Promise<void> {
   const list = inputs(N);
   timePerCall(list.slice(0, 2000), summarizePattern); // warm-up (JIT), not counted
@@ -71,4 +82,5 @@ export async function run(): Promise<void> {
   console.log(`speed-up:             ${(ref.usPer / fast.usPer).toFixed(0)}× wall, ${(ref.cpuUsPer / fast.cpuUsPer).toFixed(0)}× CPU (aim ≥ 20×)`);
   console.log(`max disagreement:     ${maxDb.toFixed(4)} dB (peak, window means; aim ≤ 0.05), ${maxDeg.toFixed(4)}° (takeoff, half-power edges; aim ≤ 0.1)`);
   console.log(`                      ground loss ${maxLossDb.toFixed(4)} dB, feed impedance ${maxOhm.toFixed(3)} Ω (independent double-integral EMF)`);
+  console.log(`machine yardstick:    ${trigYardstickNs().toFixed(1)} ns CPU per Math.sin + Math.cos pair in this run (scale the µs above by it)`);
 }
