@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { feedImpedance, gainAt, summarizePattern, type DipoleInput } from '../../shared/pattern';
+import { azimuthCut, feedImpedance, gainAt, pattern3d, summarizePattern, type DipoleInput } from '../../shared/pattern';
 import { dipoleGeometry } from '../../shared/pattern/geometry';
 import { defaultOrders, dipoleImpedances, legReaction } from '../../shared/pattern/induced-emf';
 import { dipoleImpedancesFast } from '../../shared/pattern/leg-field';
@@ -92,4 +92,29 @@ describe('mutual impedance of parallel side-by-side λ/2 dipoles (Balanis §8.6 
       expect(im).toBeCloseTo(x12 * scale, 1);
     });
   }
+});
+
+describe('cut conventions', () => {
+  it('azimuth 0° runs along the wire (nulls at 0° and 180°), 90° and 270° are broadside (free-space λ/2, Balanis §4.6)', () => {
+    const cut = azimuthCut(dipole(0.5, 1e-5), 0, 1);
+    expect(cut).toHaveLength(360);
+    const at = (a: number) => cut[a].gainDbi;
+    expect(at(0)).toBeLessThan(-60);
+    expect(at(180)).toBeLessThan(-60);
+    expect(at(90)).toBeCloseTo(2.151, 2);
+    expect(at(270)).toBeCloseTo(2.151, 2);
+    // E-plane of a λ/2 dipole: cos(π/2·cos θ)/sin θ, θ from the wire; at 60° off the wire (30° azimuth)
+    const theta = Math.PI / 6;
+    const ef = Math.cos((Math.PI / 2) * Math.cos(theta)) / Math.sin(theta);
+    expect(at(30)).toBeCloseTo(2.151 + 20 * Math.log10(ef), 2);
+  });
+
+  it('pattern3d covers the sky on its grid and agrees with gainAt', () => {
+    const input: DipoleInput = { freqMhz: 14.2, ground: { kind: 'perfect' }, shape: 'flat', heightM: 10 };
+    const p = pattern3d(input, 15);
+    expect(p.elevationsDeg).toEqual([0, 15, 30, 45, 60, 75, 90]);
+    expect(p.azimuthsDeg).toHaveLength(24);
+    expect(p.gainDbi[2][6]).toBeCloseTo(gainAt(input, 30, 90), 9);
+    expect(() => pattern3d(input, 0)).toThrow(/angle step/);
+  });
 });

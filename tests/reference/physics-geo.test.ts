@@ -40,6 +40,15 @@ describe('geodesics on WGS84 (geographiclib-geodesic)', () => {
     }
   });
 
+  it('across a field-day site the local frame keeps distances between any two points to well under a centimetre (vs the geodesic)', () => {
+    const ref = { lat: 44.95, lon: -93.1 };
+    const a = destination(ref, 450, 30);
+    const b = destination(ref, 600, 250);
+    const ea = toLocalEastNorth(ref, a), eb = toLocalEastNorth(ref, b);
+    const planar = Math.hypot(ea.eastM - eb.eastM, ea.northM - eb.northM);
+    expect(Math.abs(planar - distanceBearing(a, b).distanceM)).toBeLessThan(0.01);
+  });
+
   it('rejects impossible coordinates with a clear message', () => {
     expect(() => distanceBearing({ lat: 91, lon: 0 }, { lat: 0, lon: 0 })).toThrow(/latitude/);
     expect(() => destination({ lat: 0, lon: 0 }, -5, 0)).toThrow(/distance/);
