@@ -103,7 +103,7 @@ describe('cut conventions', () => {
     expect(at(180)).toBeLessThan(-60);
     expect(at(90)).toBeCloseTo(2.151, 2);
     expect(at(270)).toBeCloseTo(2.151, 2);
-    // E-plane of a λ/2 dipole: cos(π/2·cos θ)/sin θ, θ from the wire; at 60° off the wire (30° azimuth)
+    // E-plane of a λ/2 dipole: cos(π/2·cos θ)/sin θ, θ from the wire; here θ = 30° (azimuth 30°, elevation 0°)
     const theta = Math.PI / 6;
     const ef = Math.cos((Math.PI / 2) * Math.cos(theta)) / Math.sin(theta);
     expect(at(30)).toBeCloseTo(2.151 + 20 * Math.log10(ef), 2);
