@@ -26,7 +26,8 @@ export function createApp(deps: AppDeps, opts: AppOptions = {}): Express {
           'img-src': ["'self'", 'data:', 'blob:'],
           'font-src': ["'self'", 'data:'],
           'worker-src': ["'self'"],
-          'connect-src': ["'self'"],
+          // blob: too: the web image picker hands over a blob: URL that the photo resize step reads with fetch().
+          'connect-src': ["'self'", 'blob:'],
           // Off: a phone on the field's Wi-Fi opens http://<laptop-ip>:8080, and upgrading its requests to https breaks them.
           'upgrade-insecure-requests': null,
         },
