@@ -3,6 +3,7 @@ export { createSyncClient, RecordWriteError, type SyncClient, type SyncClientOpt
 export { SyncError, type SyncErrorCode } from './engine/sync-engine';
 export { requestPersistentStorage } from './engine/storage-persistence';
 export { browserTriggerEnv } from './engine/triggers';
+export { randomId } from './engine/random-id';
 export { createFetchTransport, type FetchTransportOptions } from './transport/fetch-transport';
 export { openIdbStore, idbDatabaseName } from './store/idb-store';
 export { createMemoryStore, MemoryDatabase } from './store/memory-store';

@@ -9,6 +9,7 @@ import {
   createSyncClient,
   idbDatabaseName,
   openIdbStore,
+  randomId,
   requestPersistentStorage,
   type LocalStore,
   type SyncClient,
@@ -35,7 +36,6 @@ export function useSyncContext(): SyncContextValue {
   return useContext(SyncContext);
 }
 
-const newDeviceId = () => crypto.randomUUID();
 
 async function accessToken({ refresh }: { refresh: boolean }): Promise<string | null> {
   // apiFetch refreshes the tokens when the server answers 401; asking for /api/me is the cheapest way to get that.
@@ -71,7 +71,7 @@ export function SyncProvider({ clubId, children }: { clubId: string; children: R
       store = durable ? await openIdbStore({ name: idbDatabaseName(userId, clubId) }) : createMemoryStore();
       let deviceId = (await store.getMeta()).deviceId;
       if (!deviceId) {
-        deviceId = newDeviceId();
+        deviceId = randomId();
         await store.setMeta({ deviceId });
       }
       const tabs = browserTabs();

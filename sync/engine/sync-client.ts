@@ -13,6 +13,7 @@ import { createScheduler, realTimers, type Timers } from './scheduler';
 import { createTabLeader, type TabLeaderEnv } from './tab-leader';
 import { describeFailure, runSyncCycle, SyncError } from './sync-engine';
 import { wireTriggers, type TriggerEnv } from './triggers';
+import { randomId } from './random-id';
 
 /** A local write the app asked for that cannot be made (the form shows the message; nothing is stored). */
 export class RecordWriteError extends Error {
@@ -89,7 +90,7 @@ export async function createSyncClient(opts: SyncClientOptions): Promise<SyncCli
   const meta = await store.getMeta();
   let offsetMs = meta.clockOffsetMs;
   const hlc = createHybridClock({ node: deviceId, nowMs: () => opts.clock.nowMs() + offsetMs, last: meta.hlcLast, maxFutureMs: MAX_CLOCK_AHEAD_MS });
-  const newId = opts.newId ?? (() => crypto.randomUUID());
+  const newId = opts.newId ?? randomId;
   const listeners = new Set<ChangeListener>();
   const statusListeners = new Set<(s: SyncStatus) => void>();
   let status: SyncStatus = {

@@ -16,7 +16,8 @@ export class MemoryDatabase {
 }
 
 const recordKey = (c: string, id: string) => `${c}/${id}`;
-const copy = <T>(v: T): T => structuredClone(v);
+// Hermes (native builds) may lack structuredClone; the stored values are plain JSON either way.
+const copy = <T>(v: T): T => (typeof structuredClone === 'function' ? structuredClone(v) : (JSON.parse(JSON.stringify(v)) as T));
 // Reads need no copy: the store core parses every read with zod, which builds new objects.
 const asRead = <T>(v: T): T => v;
 
