@@ -1,5 +1,6 @@
 import { spawn } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { buildServiceWorker } from './build-service-worker';
 
@@ -10,6 +11,18 @@ import { buildServiceWorker } from './build-service-worker';
 
 const repoRoot = path.resolve(__dirname, '../../..');
 
+/**
+ * Metro caches transformed files in os.tmpdir()/metro-cache without keying on EXPO_PUBLIC_* values, so a test build
+ * (EXPO_PUBLIC_LOFTLINE_E2E=1, see components/offline/e2e-hooks.tsx) and a production build must not share that
+ * cache: the test build gets a temp folder of its own, and a production build never picks up the test hook.
+ */
+function testBuildTmp(): { TMPDIR?: string } {
+  if (process.env.EXPO_PUBLIC_LOFTLINE_E2E !== '1') return {};
+  const dir = path.join(os.tmpdir(), 'loftline-test-build-tmp');
+  mkdirSync(dir, { recursive: true });
+  return { TMPDIR: dir };
+}
+
 export type BuildWebOptions = { outDir: string; quiet?: boolean };
 
 export async function exportWeb({ outDir, quiet }: BuildWebOptions): Promise<void> {
@@ -19,7 +32,7 @@ export async function exportWeb({ outDir, quiet }: BuildWebOptions): Promise<voi
     const child = spawn(expoBin, ['export', '--platform', 'web', '--output-dir', outDir], {
       cwd: repoRoot,
       // CI=1 keeps expo non-interactive; EXPO_OFFLINE stops it asking the network for anything.
-      env: { ...process.env, CI: '1', EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1' },
+      env: { ...process.env, CI: '1', EXPO_OFFLINE: '1', EXPO_NO_TELEMETRY: '1', ...testBuildTmp() },
       stdio: quiet ? ['ignore', 'pipe', 'pipe'] : 'inherit',
     });
     let output = '';
