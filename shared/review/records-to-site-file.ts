@@ -45,7 +45,8 @@ export function siteFileFromRecords(records: SiteRecords): SiteFileBuild {
   if (site.groundSigmaSPerM !== null && site.groundEpsR !== null) {
     ground = { sigmaSPerM: site.groundSigmaSPerM, epsR: site.groundEpsR };
   } else if (site.groundClass) {
-    ground = site.groundClass;
+    // The class name is checked against shared/ground when the file is parsed below.
+    ground = site.groundClass as SiteFile['ground'];
   } else {
     ground = UNRECORDED_GROUND;
     notes.push('No ground recorded for this site yet: patterns are computed over average ground.');
