@@ -5,6 +5,8 @@
 export { planSite } from './plan-site';
 export type { PlanResult, PlanSiteOptions, AntennaPlan, ChosenSpot } from './plan-site';
 export type { Candidate } from './evaluate';
+export { evaluateSpot } from './evaluate-spot';
+export type { SpotToEvaluate, EvaluatedSpot } from './evaluate-spot';
 export { DEFAULT_PLAN_OPTIONS, resolvePlanOptions } from './options';
 export type { PlanOptions, PlanOptionsInput } from './options';
 export { PlanInputError, DEFAULT_PURPOSE_BY_BAND } from './site-model';
