@@ -1,49 +1,25 @@
 import { CAUTION_LINES, SAFETY_CAUTION } from '../clearance/cautions';
 import type { Ground } from '../ground';
 import type { SiteFile } from '../schemas/site-file';
-import { type AssignOption, type AssignProblem, type AssignSolution, solveBruteForce, solveExact, solveHeuristic } from './assign';
+import type { AssignSolution } from './assign';
 import { type BandSpec, type SpanGeometry, allPairs, bandSpec, flatTopBetween, invertedVsAt, nearbyPairs } from './candidates';
 import { type Candidate, evaluateCandidate, footprintOf } from './evaluate';
 import { type Screened, screenCandidate } from './screen';
 import { makeCoaxChooser } from '../coax/coax-run';
 import { countBlockingLines } from '../clearance/power-line';
-import { allocateCoax } from './coax-allocation';
-import { explainAntenna } from './explain';
+import { assignAntennas } from './plan-assignment';
 import { type PlanOptionsInput, resolvePlanOptions } from './options';
 import { type PatternSummary, freeSpaceAzimuthGainsDbi, patternSummary } from './physics';
-import { type SeparatedAntenna, type SeparationResult, pairLevel, separationBetween } from './separation';
+import type { SeparationResult } from './separation';
 import { type AntennaNeed, buildSiteModel } from './site-model';
-
-/** Score given up for each pair of chosen antennas whose separation needs review. */
-export const SEPARATION_REVIEW_PENALTY = -0.05;
-
-/** Rows best first; keeps the first inverted-V per support and every flat-top. */
-function dominantRows<T extends { geom: SpanGeometry }>(rows: readonly T[]): T[] {
-  const seen = new Set<string>();
-  return rows.filter((r) => {
-    if (r.geom.shape !== 'inverted-v') return true;
-    const k = r.geom.supportIds[0];
-    if (seen.has(k)) return false;
-    seen.add(k);
-    return true;
-  });
-}
-
-/** An assignment option that carries its antenna, so pair checks need no lookup. */
-type PlanOption = AssignOption & { antenna: SeparatedAntenna };
-
-/**
- * Scores enter the assignment rounded to 0.001 (they are shown to 0.01): candidates that differ by less
- * are ties, which lets branch and bound prune them, and the total is the best possible to that step.
- */
-export function assignmentScore(score: number): number {
-  return Math.round(score * 1000) / 1000;
-}
 
 /** In free space the height only places the wire; the cut is taken at one fixed height so it is shared. */
 const FREE_SPACE_CUT_HEIGHT_M = 10;
 
 const azimuthKey = (g: { band: string; shape: string; apexDeg: number | null }) => `${g.band}|${g.shape}|${g.apexDeg ?? ''}`;
+
+/** One candidate geometry for one antenna, screened: what the ranking and the assignment work from. */
+export type ScreenedRow = { geom: SpanGeometry; pattern: PatternSummary; az: number[]; s: Screened };
 
 export type PlanSiteOptions = PlanOptionsInput & {
   /** Only this station's antennas (the assignment then places only them). */
@@ -170,10 +146,10 @@ export function planSite(site: SiteFile, options: PlanSiteOptions = {}): PlanRes
 
   const antennas: AntennaPlan[] = [];
   /** Per need: every geometry with its screened level and score, best usable first. */
-  const screenedByNeed: { geom: SpanGeometry; pattern: PatternSummary; az: number[]; s: Screened }[][] = [];
+  const screenedByNeed: ScreenedRow[][] = [];
   let candidateTotal = 0;
   const fullCache = new Map<string, Candidate>();
-  const full = (i: number, x: { geom: SpanGeometry; pattern: PatternSummary; az: number[] }): Candidate => {
+  const full = (i: number, x: ScreenedRow): Candidate => {
     const key = `${needs[i].key}#${x.geom.id}`;
     let c = fullCache.get(key);
     if (!c) {
@@ -218,79 +194,7 @@ export function planSite(site: SiteFile, options: PlanSiteOptions = {}): PlanRes
     screenedByNeed.push(rows);
   });
 
-  // ---- assignment ----
-  const maxEnds = new Map(model.supports.map((s) => [s.id, s.maxEnds]));
-  const rowById = new Map<string, { i: number; row: (typeof screenedByNeed)[number][number] }>();
-  const antennaOf = new Map<string, SeparatedAntenna>();
-  const problem: AssignProblem = {
-    needs: needs.map((need, i) => ({
-      key: need.key,
-      priority: need.wavelengthM,
-      // An inverted-V's leg directions share its feed point and support, so they meet every other antenna
-      // alike (separation depends only on feed points and bands): the best-scoring direction dominates.
-      options: dominantRows(screenedByNeed[i].filter((r) => r.s.level !== 'blocked'))
-        .map((row) => {
-          const id = `${need.key}#${row.geom.id}`;
-          rowById.set(id, { i, row });
-          const antenna: SeparatedAntenna = {
-            needKey: need.key,
-            band: row.geom.band,
-            freqMhz: need.freqMhz,
-            feed: row.geom.feed,
-            wireAzimuthDeg: row.geom.wireAzimuthDeg,
-            azimuthGainsDbi: row.az,
-          };
-          antennaOf.set(id, antenna);
-          return { id, needKey: need.key, score: assignmentScore(row.s.score), supportIds: row.geom.supportIds, antenna } satisfies PlanOption;
-        }),
-    })),
-    maxEnds: (id) => maxEnds.get(id) ?? 1,
-    pair: () => ({ allowed: true, penalty: 0 }),
-  };
-  const sepCache = new Map<string, SeparationResult>();
-  const separation = (a: AssignOption, b: AssignOption): SeparationResult => {
-    const key = a.id < b.id ? `${a.id}|${b.id}` : `${b.id}|${a.id}`;
-    let r = sepCache.get(key);
-    if (!r) {
-      const [x, y] = a.id < b.id ? [a, b] : [b, a];
-      r = separationBetween(antennaOf.get(x.id)!, antennaOf.get(y.id)!, opts.minSeparationWavelengths, opts.reviewSeparationWavelengths);
-      sepCache.set(key, r);
-    }
-    return r;
-  };
-  const allowed = { allowed: true, penalty: 0 };
-  const reviewed = { allowed: true, penalty: SEPARATION_REVIEW_PENALTY };
-  const refused = { allowed: false, penalty: 0 };
-  problem.pair = (a, b) => {
-    const level = pairLevel((a as PlanOption).antenna, (b as PlanOption).antenna, opts.minSeparationWavelengths, opts.reviewSeparationWavelengths);
-    return level === 'blocked' ? refused : level === 'needs-review' ? reviewed : allowed;
-  };
-  const method = opts.assignMethod === 'auto' ? (needs.length <= opts.exactUpToAntennas ? 'exact' : 'heuristic') : opts.assignMethod;
-  const solution =
-    method === 'exact' ? solveExact(problem, opts.maxSearchNodes) : method === 'heuristic' ? solveHeuristic(problem) : solveBruteForce(problem);
-  const chosen = solution.choice.map((o) => {
-    if (!o) return null;
-    const { i, row } = rowById.get(o.id)!;
-    return full(i, row);
-  });
-  const coax = allocateCoax(chosen, model.coax, needs);
-  const spots: ChosenSpot[] = needs.map((need, i) => ({
-    needKey: need.key,
-    stationId: need.stationId,
-    band: need.band,
-    candidate: chosen[i],
-    coaxPieceIds: coax[i].pieceIds,
-    coaxNote: coax[i].note,
-    limitedBy: explainAntenna(i, problem, solution, antennas[i], separation, maxEnds),
-  }));
-  const separations: SeparationResult[] = [];
-  for (let i = 0; i < solution.choice.length; i++) {
-    for (let j = i + 1; j < solution.choice.length; j++) {
-      const a = solution.choice[i];
-      const b = solution.choice[j];
-      if (a && b) separations.push(separation(a, b));
-    }
-  }
+  const { solution, spots, separations } = assignAntennas({ needs, rowsByNeed: screenedByNeed, antennas, model, opts, full });
   return {
     formatVersion: 1,
     caution: SAFETY_CAUTION,
