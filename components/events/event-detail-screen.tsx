@@ -11,6 +11,7 @@ import { useDeleteEvent, useEvent, useEvents } from '@/hooks/api/use-events';
 import { useSite, useSites } from '@/hooks/api/use-sites';
 import { useCurrentClub } from '@/hooks/use-current-club';
 import { can, type ClubEvent, type Role } from '@/shared/schemas';
+import { formatLatLon } from '@/components/sites/lat-lon';
 import { daysUntil, formatDayRange } from './day-range';
 import { EventList } from './event-list';
 
@@ -56,23 +57,23 @@ function EventDetail({ eventId }: { eventId: string }) {
     >
       {n > 0 ? <Badge look={{ label: `Starts in ${n} day${n === 1 ? '' : 's'}`, icon: 'calendar', fg: colors.action, bg: colors.infoSoft, border: colors.action }} testID="event-countdown" /> : null}
       <View style={styles.gap} />
+      <Card title="Work for this event" testID="event-work">
+        {workLinks(e, role).map((l) => (
+          <ListRow key={l.key} testID={`event-go-${l.key}`} title={l.title} subtitle={l.subtitle} icon={l.icon} onPress={() => router.navigate(l.href)} />
+        ))}
+      </Card>
       <Card title="Site" testID="event-site-card">
         {site.data ? (
           <ListRow
             testID="event-site-link"
             title={site.data.name}
-            subtitle={`Reference point ${site.data.refLat.toFixed(5)}, ${site.data.refLon.toFixed(5)}`}
+            subtitle={formatLatLon(site.data.refLat, site.data.refLon)}
             icon="map-pin"
             onPress={() => router.navigate(`/sites/${site.data.id}`)}
           />
         ) : (
           <ErrorText message={site.error ? errorMessage(site.error) : null} testID="event-site-error" />
         )}
-      </Card>
-      <Card title="Work for this event" testID="event-work">
-        {workLinks(e, role).map((l) => (
-          <ListRow key={l.key} testID={`event-go-${l.key}`} title={l.title} subtitle={l.subtitle} icon={l.icon} onPress={() => router.navigate(l.href)} />
-        ))}
       </Card>
       {e.notes ? (
         <Card title="Notes">

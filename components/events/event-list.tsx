@@ -38,7 +38,7 @@ export function EventList({ events, sites, mode, selectedId }: Props) {
       { key: 'dates', title: 'Days', flex: 2.8, render: (e) => <Tabular>{formatDayRange(e.startsOn, e.endsOn)}</Tabular> },
       { key: 'site', title: 'Site', flex: 1.8, render: (e) => siteName.get(e.siteId) ?? 'Unknown site' },
       { key: 'state', title: 'When', flex: 1.4, render: (e) => <Badge look={TIMING_LOOK[eventTiming(e.startsOn, e.endsOn, today)]} /> },
-      { key: 'in', title: 'Starts', flex: 1, numeric: true, render: (e) => when(e) || '—' },
+      { key: 'in', title: 'Starts', flex: 1.3, numeric: true, render: (e) => when(e) || '—' },
     ];
     return <DataTable testID="events-table" columns={columns} rows={sorted} rowKey={(e) => e.id} rowLabel={(e) => `${e.name}, ${formatDayRange(e.startsOn, e.endsOn)}`} onRowPress={open} />;
   }

@@ -17,7 +17,7 @@ import { ClubSwitcher } from './club-switcher';
 import { localTodayIso, pickFocusEvent } from './focus-event';
 import { activeNavKey, navItemsFor } from './nav-items';
 import { NoClubScreen } from './no-club-screen';
-import { SyncIndicatorSlot, SyncProviderSlot } from './sync-slot';
+import { HAS_SYNC_INDICATOR, SyncIndicatorSlot, SyncProviderSlot } from './sync-slot';
 
 /** Paths a person without any club may still open. */
 const CLUBLESS_PATHS = ['/club/new', '/settings'];
@@ -69,11 +69,18 @@ function ShellFrame({ children }: { children: React.ReactNode }) {
           items.length > 0 ? <SideNav items={items} active={active} /> : null
         ) : (
           <View style={[styles.header, { paddingTop: insets.top + spacing.s }]} testID="phone-header">
-            <BrandMark onDark />
-            <View style={styles.headerRight}>
-              <SyncIndicatorSlot />
-              <ClubSwitcher onDark />
+            <View style={styles.headerRow}>
+              {/* On a phone the mark alone leaves the club's name room to be read. */}
+              <BrandMark onDark markOnly={!!club} />
+              <View style={styles.headerClub}>
+                <ClubSwitcher onDark />
+              </View>
             </View>
+            {HAS_SYNC_INDICATOR && club ? (
+              <View style={styles.headerSync}>
+                <SyncIndicatorSlot />
+              </View>
+            ) : null}
           </View>
         )}
         <View style={styles.main} role="main">
@@ -90,15 +97,9 @@ const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.paper },
   row: { flexDirection: 'row' },
   center: { flex: 1, alignItems: 'center', justifyContent: 'center', backgroundColor: colors.paper },
-  header: {
-    backgroundColor: colors.shellBar,
-    flexDirection: 'row',
-    alignItems: 'center',
-    justifyContent: 'space-between',
-    paddingHorizontal: spacing.l,
-    paddingBottom: spacing.s,
-    gap: spacing.m,
-  },
-  headerRight: { flexDirection: 'row', alignItems: 'center', gap: spacing.s, flexShrink: 1 },
+  header: { backgroundColor: colors.shellBar, paddingHorizontal: spacing.l, paddingBottom: spacing.s, gap: spacing.s },
+  headerRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.m },
+  headerClub: { flex: 1, alignItems: 'flex-end' },
+  headerSync: { alignItems: 'flex-start' },
   main: { flex: 1 },
 });

@@ -4,16 +4,18 @@ import { Icon } from '@/components/ui/icon';
 import { Txt } from '@/components/ui/text';
 
 /** The Loftline mark: a line lofted from a tall support to a short one, in throw-line orange. */
-export function BrandMark({ onDark, size = 'm' }: { onDark?: boolean; size?: 'm' | 'l' }) {
+export function BrandMark({ onDark, size = 'm', markOnly }: { onDark?: boolean; size?: 'm' | 'l'; markOnly?: boolean }) {
   const big = size === 'l';
   return (
     <View style={styles.row} accessibilityLabel="Loftline">
       <View style={[styles.tile, big && styles.tileBig]}>
         <Icon name="logo" size={big ? 34 : 24} color={colors.onAction} />
       </View>
-      <Txt variant={big ? 'display' : 'title'} color={onDark ? colors.onShellBar : colors.ink} style={styles.word}>
-        Loftline
-      </Txt>
+      {markOnly ? null : (
+        <Txt variant={big ? 'display' : 'title'} color={onDark ? colors.onShellBar : colors.ink} style={styles.word}>
+          Loftline
+        </Txt>
+      )}
     </View>
   );
 }

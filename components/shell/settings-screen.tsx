@@ -1,14 +1,15 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '@/constants/theme';
-import { Button, Card, Select, Screen, Tabular, Txt } from '@/components/ui';
+import { Card, Select, Screen, Tabular, Txt } from '@/components/ui';
+import { SignOutButton } from './sign-out-button';
 import { useSession } from '@/hooks/auth/use-session';
 import { useCurrentClub } from '@/hooks/use-current-club';
 import { useUnits } from '@/hooks/use-units';
 import { ROLE_LABELS } from '@/shared/schemas';
 
 export function SettingsScreen() {
-  const { user, signOut } = useSession();
+  const { user } = useSession();
   const { clubs } = useCurrentClub();
   const units = useUnits();
   const router = useRouter();
@@ -49,16 +50,7 @@ export function SettingsScreen() {
           </View>
         </Card>
       ) : null}
-      <Button
-        label="Sign out"
-        icon="sign-out"
-        variant="danger"
-        testID="settings-sign-out"
-        onPress={async () => {
-          await signOut();
-          router.replace('/sign-in');
-        }}
-      />
+      <SignOutButton testID="settings-sign-out" />
       <Txt variant="caption" color={colors.inkMuted} style={styles.note}>
         Testing without a mail account? Invitations and reset links land in the{' '}
         <Txt variant="caption" color={colors.action} onPress={() => router.navigate('/mailbox')} testID="settings-mailbox" accessibilityRole="link">

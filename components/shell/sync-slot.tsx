@@ -22,6 +22,8 @@ const providerCtx = require.context('../../hooks', true, /^\.\/sync\/index\.tsx?
 const SyncIndicator = findExport<ComponentType<object>>(indicatorCtx, ['SyncIndicator', 'default']);
 const SyncProvider = findExport<ComponentType<{ clubId: string; children: ReactNode }>>(providerCtx, ['SyncProvider']);
 
+export const HAS_SYNC_INDICATOR = SyncIndicator !== null;
+
 export function SyncIndicatorSlot() {
   return SyncIndicator ? <SyncIndicator /> : null;
 }

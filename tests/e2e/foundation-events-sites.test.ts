@@ -1,6 +1,5 @@
-import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, expect, it } from 'vitest';
-import { byTestId, launchBrowser, newPage, screenshot } from './helpers/browser';
+import { byTestId, browserForFile, newPage, screenshot } from './helpers/browser';
 import { DEMO_SITE, DEMO_USERS } from './helpers/demo-users';
 import { goToNav, signIn } from './helpers/session';
 
@@ -9,18 +8,12 @@ import { goToNav, signIn } from './helpers/session';
  * notes) and see the club's events and sites in lists that work on a phone and as tables on a wide screen."
  */
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile(beforeAll, afterAll);
 
 it('the lead adds a site with a typed reference point, refused in plain words when out of range, then an event there; both show as cards and rows on a phone and as tables on a wide screen', async () => {
   const siteName = `Heron Lake picnic field ${Date.now() % 10_000}`;
   const eventName = `Winter sprint ${Date.now() % 10_000}`;
-  const phone = await newPage(browser, 'phone');
+  const phone = await newPage(browser(), 'phone');
   const p = phone.page;
   await signIn(p, DEMO_USERS.lead);
 
@@ -73,7 +66,7 @@ it('the lead adds a site with a typed reference point, refused in plain words wh
   await screenshot(p, 'events-cards', 'phone');
 
   // The same lists at a wide viewport are tables; an event opens beside the list.
-  const wide = await newPage(browser, 'wide');
+  const wide = await newPage(browser(), 'wide');
   const w = wide.page;
   await signIn(w, DEMO_USERS.lead);
   await byTestId(w, 'events-table').getByText(`${eventName} (edited)`).waitFor();
@@ -87,7 +80,7 @@ it('the lead adds a site with a typed reference point, refused in plain words wh
   await screenshot(w, 'sites-table', 'wide');
 
   // A scout reads the new event but cannot create or edit one.
-  const scout = await newPage(browser, 'phone');
+  const scout = await newPage(browser(), 'phone');
   await signIn(scout.page, DEMO_USERS.scout);
   await byTestId(scout.page, 'events-cards').getByText(`${eventName} (edited)`).click();
   await byTestId(scout.page, 'event-detail-title').waitFor();
@@ -101,7 +94,7 @@ it('the lead adds a site with a typed reference point, refused in plain words wh
 });
 
 it('units chosen in Settings apply to lengths shown (12.5 m shows as 41 ft; 1 ft = 0.3048 m, NIST HB 44)', async () => {
-  const { context, page } = await newPage(browser, 'phone');
+  const { context, page } = await newPage(browser(), 'phone');
   await signIn(page, DEMO_USERS.scout);
   await goToNav(page, 'settings');
   expect(await byTestId(page, 'settings-units-example').innerText()).toBe('12.5 m');

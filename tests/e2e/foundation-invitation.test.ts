@@ -1,6 +1,5 @@
-import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, expect, it } from 'vitest';
-import { byTestId, launchBrowser, newPage, screenshot } from './helpers/browser';
+import { byTestId, browserForFile, newPage, screenshot } from './helpers/browser';
 import { DEMO_CLUB, DEMO_USERS } from './helpers/demo-users';
 import { linkIn, waitForMail } from './helpers/mailbox';
 import { goToNav, signIn, signOut } from './helpers/session';
@@ -10,20 +9,14 @@ import { goToNav, signIn, signOut } from './helpers/session';
  * "As an admin, change a member's role or remove them". Walked through the fake mailbox.
  */
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile(beforeAll, afterAll);
 
 it('admin invites by e-mail, the link in the fake mailbox signs a new person up into the club, the admin changes their role and removes them', async () => {
   const email = `new-scout-${Date.now()}@kestrel.test`;
   const password = 'a long field-day passphrase';
 
   // The admin invites at the wide viewport.
-  const admin = await newPage(browser, 'wide');
+  const admin = await newPage(browser(), 'wide');
   await signIn(admin.page, DEMO_USERS.admin);
   await goToNav(admin.page, 'club');
   await byTestId(admin.page, 'invite-email').fill('not-an-address');
@@ -38,7 +31,7 @@ it('admin invites by e-mail, the link in the fake mailbox signs a new person up 
   // The e-mail arrives through the queue; its link opens the invitation on a phone.
   const mail = await waitForMail(email, /invit/i);
   const link = linkIn(mail, '/invite/');
-  const guest = await newPage(browser, 'phone');
+  const guest = await newPage(browser(), 'phone');
   await guest.page.goto(link);
   await byTestId(guest.page, 'invite-summary').waitFor();
   expect(await byTestId(guest.page, 'invite-summary').innerText()).toContain(DEMO_CLUB);

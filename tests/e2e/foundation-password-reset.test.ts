@@ -1,22 +1,15 @@
-import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, expect, it } from 'vitest';
-import { byTestId, launchBrowser, newPage, screenshot } from './helpers/browser';
+import { byTestId, browserForFile, newPage, screenshot } from './helpers/browser';
 import { linkIn, waitForMail } from './helpers/mailbox';
 import { baseUrl, signIn } from './helpers/session';
 
 /* Issue 2: "Sign up with e-mail and password … reset a forgotten password by e-mail, sign out." */
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile(beforeAll, afterAll);
 
 it('signs up, signs out, resets the forgotten password from the e-mailed link and signs in with the new one only', async () => {
   const email = `forgetful-${Date.now()}@example.test`;
-  const { context, page, errors } = await newPage(browser, 'phone');
+  const { context, page, errors } = await newPage(browser(), 'phone');
 
   await page.goto(`${baseUrl()}/sign-up`);
   await byTestId(page, 'sign-up-name').fill('Otto Brandt');
@@ -60,7 +53,7 @@ it('signs up, signs out, resets the forgotten password from the e-mailed link an
 
 it('a used reset link cannot be used twice', async () => {
   const email = `twice-${Date.now()}@example.test`;
-  const { context, page } = await newPage(browser, 'wide');
+  const { context, page } = await newPage(browser(), 'wide');
   const res = await fetch(`${baseUrl()}/api/auth/sign-up`, {
     method: 'POST',
     headers: { 'content-type': 'application/json' },

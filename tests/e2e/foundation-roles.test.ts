@@ -1,7 +1,6 @@
-import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLE_LABELS, type Role } from '../../shared/schemas';
-import { byTestId, launchBrowser, newPage, screenshot, VIEWPORTS, type ViewportName } from './helpers/browser';
+import { byTestId, browserForFile, newPage, screenshot, VIEWPORTS, type ViewportName } from './helpers/browser';
 import { DEMO_CLUB, DEMO_USERS } from './helpers/demo-users';
 import { goToNav, signIn } from './helpers/session';
 
@@ -20,17 +19,11 @@ const PLACES: Record<Role, string[]> = {
 const ALL = ['events', 'survey', 'plan', 'review', 'sheets', 'club', 'settings'];
 const WRITES_EVENTS: Record<Role, boolean> = { admin: true, lead: true, safety: false, scout: false, crew: false };
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile(beforeAll, afterAll);
 
 describe.each(Object.keys(VIEWPORTS) as ViewportName[])('at the %s viewport', (viewport) => {
   it.each(Object.keys(PLACES) as Role[])('%s signs in and sees the places and controls of that role', async (role) => {
-    const { context, page, errors } = await newPage(browser, viewport);
+    const { context, page, errors } = await newPage(browser(), viewport);
     try {
       await signIn(page, DEMO_USERS[role]);
       await expect.poll(() => byTestId(page, 'current-role').first().innerText()).toContain(ROLE_LABELS[role]);

@@ -44,3 +44,18 @@ export async function screenshot(page: Page, name: string, viewport: ViewportNam
 
 /** Find by testID (react-native-web renders it as data-testid). */
 export const byTestId = (page: Page, id: string) => page.locator(`[data-testid="${id}"]`);
+
+/** One browser per test file, launched before its tests and closed after them. */
+export function browserForFile(beforeAll: (fn: () => Promise<void>) => void, afterAll: (fn: () => Promise<void>) => void): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('the browser is not launched yet (call inside a test)');
+    return browser;
+  };
+}
