@@ -71,8 +71,8 @@ export function scoreCandidate(args: {
     coaxShort = `${Math.round(coax.runM)} m of ${type}, ${lossDb === null ? 'loss unknown' : `${lossDb.toFixed(1)} dB`}`;
     const pieces = coax.best
       ? coax.best.pieceIds.length === 1
-        ? `piece ${coax.best.pieceIds[0]} (${coax.best.lengthM.toFixed(0)} m)`
-        : `pieces ${coax.best.pieceIds.join(' + ')} joined (${coax.best.lengthM.toFixed(0)} m)`
+        ? `best piece on its own ${coax.best.pieceIds[0]} (${coax.best.lengthM.toFixed(0)} m)`
+        : `best on its own: pieces ${coax.best.pieceIds.join(' + ')} joined (${coax.best.lengthM.toFixed(0)} m)`
       : 'no piece in the inventory reaches';
     coaxLine = `${coax.runM.toFixed(1)} m run to ${coax.operatingPositionId} (${coax.groundRouteM.toFixed(1)} m on the ground, ${coax.dropM.toFixed(1)} m drop, ${coax.slackM.toFixed(1)} m slack): ${pieces}; ${lossDb === null ? 'loss unknown' : `${lossDb.toFixed(2)} dB at SWR ${pattern.swr50.toFixed(2)}`}`;
   }
