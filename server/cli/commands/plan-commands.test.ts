@@ -80,6 +80,9 @@ describe('demo-site, propose and assign commands', { timeout: 120_000 }, () => {
     expect(await assign.run(['--site', join(dir, 'missing.json')])).toBe(1);
     expect(err[0]).toMatch(/^assign: cannot read/);
     err.length = 0;
+    expect(await propose.run(['--site', file, '--station', 'nobody'])).toBe(2);
+    expect(err[0]).toMatch(/^propose: --station "nobody" is not in .* \(stations: night-80, main-40/);
+    err.length = 0;
     expect(await assign.run(['--sight', file])).toBe(2);
     expect(err).toHaveLength(1);
   });

@@ -30,6 +30,10 @@ export async function run(argv: string[]): Promise<number> {
   }
   const site = readSite(values.site, 'propose');
   if (!site) return 1;
+  if (values.station !== undefined && !site.stations.some((s) => s.id === values.station)) {
+    console.error(`propose: --station "${values.station}" is not in ${values.site} (stations: ${site.stations.map((s) => s.id).join(', ') || 'none'})`);
+    return 2;
+  }
   const result = planSite(site, { stationId: values.station, topPerAntenna: top });
   if (values.json) {
     console.log(JSON.stringify({ caution: result.caution, cautions: result.cautions, ground: result.ground, antennas: result.antennas, stats: result.stats }, null, 2));
