@@ -2,7 +2,7 @@
 // shared zod field rules (shared/schemas/records.ts), event.write for writers, and the rows written into the synced
 // tables (change_seq from the trigger, per-field clocks) so that phones pull them like any other change.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { decodeHlc } from '../../sync/protocol';
+import { PROTOCOL_VERSION, SCHEMA_VERSION, compareHlc, decodeHlc, pullResponseSchema } from '../../sync/protocol';
 import { startTestApp, type TestApp, type TestUser } from './helpers/test-app';
 
 let t: TestApp;
@@ -144,5 +144,30 @@ describe('events', () => {
     expect((await t.api('PATCH', events(`/${ev.body.id}`), { auth: scout, body: { name: 'Renamed' } })).status).toBe(403);
     expect((await t.api('DELETE', events(`/${ev.body.id}`), { auth: scout })).status).toBe(403);
     expect((await t.api('GET', events(`/${ev.body.id}`), { auth: scout })).body.name).toBe('Scouted');
+  });
+});
+
+describe('REST writes reach the phones through sync', () => {
+  async function pullAll(): Promise<Map<string, { fields: Record<string, unknown>; fieldClocks: Record<string, string>; deletedAt: string | null }>> {
+    const res = await t.api('POST', `/api/clubs/${clubId}/sync/pull`, {
+      auth: lead,
+      body: { type: 'pull', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, cursor: '0', limit: 1000 },
+    });
+    expect(res.status).toBe(200);
+    const answer = pullResponseSchema.parse(res.body);
+    if (answer.type !== 'changes') throw new Error(`pull answered ${answer.type}`);
+    return new Map(answer.changes.map((c) => [c.id, c]));
+  }
+
+  it('a site created, edited and deleted over REST is pulled with its new values, newer clocks and its tombstone', async () => {
+    const site = await newSite({ name: 'Pulled Meadow' });
+    const first = (await pullAll()).get(site.id)!;
+    expect(first.fields).toMatchObject({ name: 'Pulled Meadow', refLat: alderBend.refLat });
+    await t.api('PATCH', sites(`/${site.id}`), { auth: lead, body: { name: 'Pulled Meadow (north)' } });
+    const edited = (await pullAll()).get(site.id)!;
+    expect(edited.fields.name).toBe('Pulled Meadow (north)');
+    expect(compareHlc(edited.fieldClocks.name, first.fieldClocks.name)).toBe(1);
+    await t.api('DELETE', sites(`/${site.id}`), { auth: lead });
+    expect((await pullAll()).get(site.id)!.deletedAt).not.toBeNull();
   });
 });
