@@ -31,6 +31,12 @@ export const siteFieldsSchema = z.strictObject({
   rules: shortText(4000, 'site rules').default(''),
 });
 
+/**
+ * The site fields a scout records during the survey ("survey.write": ground, site notes). Changing only these
+ * needs survey.write; anything else on a site (name, reference point) or creating a site needs event.write.
+ */
+export const SITE_SURVEY_FIELDS = ['groundDescription', 'groundClass', 'groundSigmaSPerM', 'groundEpsR', 'accessNotes', 'rules', 'notes'] as const;
+
 export const eventFieldsSchema = z
   .strictObject({
     siteId: idSchema,

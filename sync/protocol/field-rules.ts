@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { can, COLLECTIONS, type CollectionName, type Role } from '../../shared/schemas';
+import { can, COLLECTIONS, SITE_SURVEY_FIELDS, type CollectionName, type Role } from '../../shared/schemas';
 import type { MutationOp } from './messages';
 
 /** The object schema of a collection's fields, without its cross-field refinements. */
@@ -44,10 +44,13 @@ export function checkEditedFields(collection: CollectionName, fields: Record<str
 
 /** Crew may change only a spot's state, its reason and the measured SWR (the "spot.status" ability). */
 const SPOT_STATUS_FIELDS = new Set(['state', 'stateReason', 'measuredSwr']);
+const SITE_SURVEY_FIELD_SET = new Set<string>(SITE_SURVEY_FIELDS);
 
 /** May this role make this change? (The server enforces it on every mutation; the app hides controls with it.) */
 export function mayWrite(role: Role, collection: CollectionName, op: MutationOp, fieldKeys: string[], isNew: boolean): boolean {
   if (can(role, COLLECTIONS[collection].ability)) return true;
+  // A scout records a site's ground and notes (survey.write) but may not rename, move or create the site.
+  if (collection === 'sites' && op === 'upsert' && !isNew && fieldKeys.length > 0 && fieldKeys.every((k) => SITE_SURVEY_FIELD_SET.has(k))) return can(role, 'survey.write');
   return (
     collection === 'antennaSpots' &&
     op === 'upsert' &&
