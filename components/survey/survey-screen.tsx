@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import { ScrollView, StyleSheet, View, useWindowDimensions } from 'react-native';
+import { ActivityIndicator, ScrollView, StyleSheet, View, useWindowDimensions } from 'react-native';
 import { Button, EmptyState, Txt } from '@/components/ui';
 import { colors, radii, spacing } from '@/constants/theme';
 import { SurveyUndoProvider, useSurveyWrites } from '@/hooks/survey/use-survey-undo';
@@ -56,6 +56,14 @@ function SurveyBody({ siteId }: { siteId: string }) {
   const me = useMemo(() => (position.latest && data.project ? { at: data.project(position.latest.lat, position.latest.lon), accuracyM: position.latest.accuracyM } : null), [position.latest, data.project]);
   const draft = useMemo(() => (data.project ? draftPoints.map((p) => data.project!(p.lat, p.lon)) : []), [draftPoints, data.project]);
 
+  if (data.loading) {
+    return (
+      <View style={[styles.fill, styles.centre]} testID="survey-loading">
+        <ActivityIndicator size="large" color={colors.action} />
+        <Txt color={colors.inkMuted}>Opening the survey on this phone…</Txt>
+      </View>
+    );
+  }
   if (!data.site) {
     return (
       <View style={styles.fill}>
@@ -161,6 +169,7 @@ function SurveyBody({ siteId }: { siteId: string }) {
 const styles = StyleSheet.create({
   fill: { flex: 1, backgroundColor: colors.paper },
   grow: { flex: 1 },
+  centre: { alignItems: 'center', justifyContent: 'center', gap: spacing.m },
   head: { flexDirection: 'row', alignItems: 'center', gap: spacing.s, marginBottom: spacing.m },
   phoneContent: { padding: spacing.l, paddingBottom: 96 },
   wideRow: { flexDirection: 'row', gap: spacing.xl, padding: spacing.xl },

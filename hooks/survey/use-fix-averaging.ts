@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { addReading, averaged, type AveragedFix, type Fix } from '@/components/survey/placement/placement-logic';
 import { surveyGeo } from '@/components/survey/placement/survey-geo';
 import type { PositionReading } from './use-position';
@@ -9,9 +9,14 @@ import type { PositionReading } from './use-position';
  */
 export function useFixAveraging(latest: PositionReading | null, running: boolean): { readings: Fix[]; fix: AveragedFix | null; restart: () => void } {
   const [readings, setReadings] = useState<Fix[]>([]);
+  const startedAt = useRef(Date.now());
   useEffect(() => {
-    if (running && latest) setReadings((rs) => addReading(rs, latest));
+    if (running && latest) setReadings((rs) => addReading(rs, latest, startedAt.current));
   }, [latest, running]);
   const fix = useMemo(() => averaged(readings, surveyGeo), [readings]);
-  return { readings, fix, restart: () => setReadings([]) };
+  const restart = useCallback(() => {
+    startedAt.current = Date.now();
+    setReadings([]);
+  }, []);
+  return { readings, fix, restart };
 }

@@ -6,6 +6,8 @@ import { buildFeatures, featurePoints, type PlanFeature } from '@/components/sur
 import { projector } from '@/components/survey/placement/survey-geo';
 
 export type SurveyData = {
+  /** The local store is still opening or reading: show a wait, not "nothing here". */
+  loading: boolean;
   site: Site | null;
   supports: Support[];
   hazards: Hazard[];
@@ -40,5 +42,6 @@ export function useSurveyData(siteId: string): SurveyData {
   const features = useMemo(() => (project ? buildFeatures({ supports, hazards, operatingPositions: positions }, project) : []), [project, supports, hazards, positions]);
   const b = boundsOf(featurePoints(features));
   const siteSpanM = b && features.length >= 2 ? Math.max(b.maxEastM - b.minEastM, b.maxNorthM - b.minNorthM) : null;
-  return { site: live, supports, hazards, positions, measurements, photos, features, project, siteSpanM };
+  const loading = site === undefined || allSupports === undefined || allHazards === undefined || allPositions === undefined;
+  return { loading, site: live, supports, hazards, positions, measurements, photos, features, project, siteSpanM };
 }

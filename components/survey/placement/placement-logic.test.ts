@@ -30,6 +30,11 @@ describe('placement rules (fix averaging session, distance and bearing)', () => 
     expect(averaged([], geo)).toBeNull();
   });
 
+  it('ignores a reading taken well before the session started (where the scout stood before walking over)', () => {
+    expect(addReading([], { lat: 1, lon: 2, accuracyM: 5, atMs: 1_000 }, 10_000)).toEqual([]);
+    expect(addReading([], { lat: 1, lon: 2, accuracyM: 5, atMs: 7_000 }, 10_000)).toHaveLength(1);
+  });
+
   it('the fix measurement keeps the count, best and worst readings and how long the scout waited', () => {
     const rs = [{ lat: 1, lon: 2, accuracyM: 8, atMs: 1000 }, { lat: 1, lon: 2, accuracyM: 4, atMs: 6500 }];
     expect(fixMeasurementInputs(averaged(rs, geo)!, rs)).toMatchObject({ readings: 2, bestReadingM: 4, worstReadingM: 8, spanS: 5.5 });

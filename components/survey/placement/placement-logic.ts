@@ -20,9 +20,16 @@ export const WORST_READING_M = 500;
 /** A fix is offered once this many readings agree; more keep improving it while the scout waits. */
 export const MIN_READINGS = 3;
 
-/** Add a reading to the session unless it repeats one already held or has no usable accuracy. */
-export function addReading(readings: readonly Fix[], r: Fix): Fix[] {
+/** A reading up to this old when the session starts still says where the scout stands now (common practice). */
+export const FRESH_READING_MS = 5000;
+
+/**
+ * Add a reading to the session unless it repeats one already held, has no usable accuracy, or was taken
+ * before the session started (where the scout stood before walking over here).
+ */
+export function addReading(readings: readonly Fix[], r: Fix, sessionStartMs = -Infinity): Fix[] {
   if (r.accuracyM === null || !(r.accuracyM > 0) || r.accuracyM > WORST_READING_M) return [...readings];
+  if (r.atMs < sessionStartMs - FRESH_READING_MS) return [...readings];
   if (readings.some((x) => x.atMs === r.atMs)) return [...readings];
   return [...readings, r];
 }

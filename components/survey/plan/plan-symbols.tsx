@@ -1,3 +1,4 @@
+import { Platform } from 'react-native';
 import { Circle, G, Line, Path, Polygon, Polyline, Rect, Text as SvgText } from 'react-native-svg';
 import { fonts } from '@/constants/theme';
 import type { HazardFeature, PlanFeature } from './plan-features';
@@ -23,12 +24,20 @@ function Label({ at, text, dy = POINT_LABEL_DY, color = planColors.label }: { at
   );
 }
 
+/**
+ * On the web each symbol's group carries its record's label (for screen readers and for tests that tap a
+ * symbol); react-native-svg passes unknown props through to the DOM there.
+ */
+function symbolAttrs(f: PlanFeature): object {
+  return Platform.OS === 'web' ? { 'aria-label': f.label, 'data-testid': `plan-symbol-${f.id}` } : {};
+}
+
 export function PointSymbol({ feature, at, selected, showLabel = true }: { feature: Exclude<PlanFeature, HazardFeature>; at: ScreenPoint; selected: boolean; showLabel?: boolean }) {
   const ring = selected ? <Circle cx={at.x} cy={at.y} r={19} fill="none" stroke={planColors.selected} strokeWidth={3.5} /> : null;
   if (feature.type === 'position') {
     // A rounded square marked "OP": nothing else on the plan has this shape, and no triangle (the danger sign).
     return (
-      <G>
+      <G {...symbolAttrs(feature)}>
         {ring}
         <Rect x={at.x - 12} y={at.y - 11} width={24} height={22} rx={5} fill={planColors.positionFill} stroke={planColors.position} strokeWidth={2.5} />
         <SvgText x={at.x} y={at.y + 4.5} fontSize={11} fontFamily={fonts.bold} fontWeight="700" textAnchor="middle" fill={planColors.position}>OP</SvgText>
@@ -38,7 +47,7 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
   }
   if (feature.kind === 'tree') {
     return (
-      <G>
+      <G {...symbolAttrs(feature)}>
         {ring}
         <Circle cx={at.x} cy={at.y} r={13} fill={planColors.treeCrown} stroke={planColors.tree} strokeWidth={2.5} />
         <Circle cx={at.x - 4} cy={at.y - 3} r={4.5} fill="none" stroke={planColors.tree} strokeWidth={1.5} />
@@ -50,7 +59,7 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
   }
   if (feature.kind === 'mast') {
     return (
-      <G>
+      <G {...symbolAttrs(feature)}>
         {ring}
         <Polygon points={`${at.x},${at.y - 13} ${at.x + 11},${at.y + 9} ${at.x - 11},${at.y + 9}`} fill="#DFE8F8" stroke={planColors.mast} strokeWidth={2.5} strokeLinejoin="round" />
         <Line x1={at.x} y1={at.y - 13} x2={at.x} y2={at.y + 9} stroke={planColors.mast} strokeWidth={2} />
@@ -60,7 +69,7 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
     );
   }
   return (
-    <G>
+    <G {...symbolAttrs(feature)}>
       {ring}
       <Rect x={at.x - 10} y={at.y - 10} width={20} height={20} fill="#EAE1CF" stroke={planColors.structure} strokeWidth={2.5} />
       <Line x1={at.x - 10} y1={at.y - 10} x2={at.x + 10} y2={at.y + 10} stroke={planColors.structure} strokeWidth={1.5} />
@@ -78,7 +87,7 @@ export function HazardSymbol({ feature, points, selected, showLabel = true }: { 
     ? <Polygon points={pts} fill={look.fill} stroke={look.stroke} strokeWidth={look.widthPx} strokeDasharray={look.dash} />
     : <Polyline points={pts} fill="none" stroke={look.stroke} strokeWidth={look.widthPx} strokeDasharray={look.dash} strokeLinecap="round" strokeLinejoin="round" />;
   return (
-    <G>
+    <G {...symbolAttrs(feature)}>
       {selected ? <Polyline points={feature.isArea && points.length >= 3 ? `${pts} ${points[0].x},${points[0].y}` : pts} fill="none" stroke={planColors.selected} strokeWidth={look.widthPx + 10} strokeOpacity={0.55} strokeLinecap="round" strokeLinejoin="round" /> : null}
       {isPower ? <Polyline points={pts} fill="none" stroke={planColors.dangerBand} strokeWidth={26} strokeLinecap="round" strokeLinejoin="round" /> : null}
       {isPower ? <Polyline points={pts} fill="none" stroke="#FFFCF6" strokeWidth={look.widthPx + 3} strokeLinecap="round" strokeLinejoin="round" /> : null}

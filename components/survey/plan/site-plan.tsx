@@ -21,10 +21,12 @@ type Props = {
   draft?: WorldPoint[];
   height: number;
   testID?: string;
+  /** Drawn over the hazards and under the points (the plan screen's wire, circles and coax route). */
+  overlay?: (toScreen: (p: WorldPoint) => { x: number; y: number }, pxPerM: number) => React.ReactNode;
 };
 
 /** The site drawn from local records alone: no map tiles, so it works in a park with no signal. */
-export function SitePlan({ features, me, selected, onSelect, draft, height, testID = 'site-plan' }: Props) {
+export function SitePlan({ features, me, selected, onSelect, draft, height, testID = 'site-plan', overlay }: Props) {
   const { system } = useUnits();
   const ref = useRef<View>(null);
   const [size, setSize] = useState({ widthPx: 0, heightPx: height });
@@ -84,6 +86,7 @@ export function SitePlan({ features, me, selected, onSelect, draft, height, test
               if (f.type === 'hazard') return <HazardSymbol key={f.id} feature={f} points={f.points.map((p) => worldToScreen(view, size, p))} selected={isSel} showLabel={shownLabels.has(f.id)} />;
               return null;
             })}
+            {overlay ? overlay((p) => worldToScreen(view, size, p), view.pxPerM) : null}
             {draft && draft.length > 0 ? <Draft points={draft.map((p) => worldToScreen(view, size, p))} /> : null}
             {me ? <Me at={worldToScreen(view, size, me.at)} radiusPx={(me.accuracyM ?? 0) * view.pxPerM} /> : null}
             {features.map((f) => (f.type === 'hazard' ? null : <PointSymbol key={f.id} feature={f} at={worldToScreen(view, size, f.at)} selected={!!selected && selected.id === f.id} showLabel={shownLabels.has(f.id)} />))}
