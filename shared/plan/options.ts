@@ -41,6 +41,8 @@ export type PlanOptions = {
   exactUpToAntennas: number;
   /** 'auto': exact up to exactUpToAntennas, heuristic beyond; the others force one method (tests, studies). */
   assignMethod: 'auto' | 'exact' | 'heuristic' | 'brute-force';
+  /** Offer every inverted-V leg direction to the assignment (normally only the best per support: see plan-assignment.ts). */
+  keepAllLegDirections: boolean;
   /** Skip support pairs farther apart than the longest usable span (a spatial grid) and cache patterns. */
   pruneAndCache: boolean;
 };
@@ -64,6 +66,7 @@ export const DEFAULT_PLAN_OPTIONS: PlanOptions = {
   maxSearchNodes: 2_000_000,
   exactUpToAntennas: 8,
   assignMethod: 'auto',
+  keepAllLegDirections: false,
   pruneAndCache: true,
 };
 

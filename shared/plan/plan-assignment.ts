@@ -61,7 +61,7 @@ export function assignAntennas(args: {
       priority: need.wavelengthM,
       // An inverted-V's leg directions share its feed point and support, so they meet every other antenna
       // alike (separation depends only on feed points and bands): the best-scoring direction dominates.
-      options: dominantRows(args.rowsByNeed[i].filter((r) => r.s.level !== 'blocked'))
+      options: ((rows) => (opts.keepAllLegDirections ? rows : dominantRows(rows)))(args.rowsByNeed[i].filter((r) => r.s.level !== 'blocked'))
         .map((row) => {
           const id = `${need.key}#${row.geom.id}`;
           rowById.set(id, { i, row });

@@ -48,6 +48,16 @@ describe('assignment on seeded random small sites', { timeout: 120_000 }, () => 
     expect(compared).toBe(12);
   });
 
+  it('offering one leg direction per inverted-V support loses nothing: equals brute force over every direction (8 sites)', () => {
+    for (let seed = 40; seed < 48; seed++) {
+      const site = smallSite(seed);
+      site.stations = site.stations.slice(0, 2); // every leg direction makes brute force grow fast
+      const exact = planSite(site, { assignMethod: 'exact' });
+      const brute = planSite(site, { assignMethod: 'brute-force', keepAllLegDirections: true });
+      expect(exact.assignment.totalScore).toBeCloseTo(brute.assignment.totalScore, 9);
+    }
+  });
+
   it('the heuristic never beats the proven optimum and stays feasible', () => {
     for (let seed = 20; seed < 26; seed++) {
       const site = smallSite(seed);
