@@ -45,6 +45,10 @@ export const tokensSchema = z.object({
 export type Tokens = z.infer<typeof tokensSchema>;
 
 export const clubCreateSchema = z.strictObject({ name: nameText(120, 'club name'), callSign: callSignSchema.default('') });
+/** PATCH /api/clubs/:clubId (club.manage): rename the club or change its call sign; send at least one. */
+export const clubUpdateSchema = z
+  .strictObject({ name: nameText(120, 'club name').optional(), callSign: callSignSchema.optional() })
+  .refine((u) => u.name !== undefined || u.callSign !== undefined, { message: 'send a new name or call sign' });
 export const clubSchema = z.object({ id: idSchema, name: z.string(), callSign: z.string(), role: roleSchema });
 export type Club = z.infer<typeof clubSchema>;
 

@@ -50,6 +50,16 @@ describe('clubs', () => {
     expect(me.body.clubs.map((c: { role: string }) => c.role).sort()).toEqual(['safety', 'scout']);
   });
 
+  it('an admin renames the club and changes its call sign; an empty change is 400', async () => {
+    const { admin, club } = await newClub();
+    const renamed = await t.api('PATCH', `/api/clubs/${club.id}`, { auth: admin, body: { name: 'Kestrel Ridge ARC', callSign: 'w0krc' } });
+    expect(renamed.status).toBe(200);
+    expect(renamed.body).toEqual({ ...club, name: 'Kestrel Ridge ARC', callSign: 'W0KRC' });
+    const empty = await t.api('PATCH', `/api/clubs/${club.id}`, { auth: admin, body: {} });
+    expect(empty.status).toBe(400);
+    expect(empty.body.message).toMatch(/new name or call sign/);
+  });
+
   it("another club's id answers 404, exactly like an id that does not exist", async () => {
     const { club } = await newClub();
     const stranger = await t.signUpUser();

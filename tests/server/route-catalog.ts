@@ -55,6 +55,7 @@ export const ROUTES: RouteSpec[] = [
   { method: 'POST', path: '/api/clubs', access: 'user', optional: ['callSign'], body: () => ({ name: 'Heron Point Radio Club', callSign: 'K0HPR' }) },
   { method: 'GET', path: '/api/clubs', access: 'user' },
   { method: 'GET', path: '/api/clubs/:clubId', access: 'member' },
+  { method: 'PATCH', path: '/api/clubs/:clubId', access: 'club.manage', partial: true, body: () => ({ name: 'Kestrel Ridge Amateur Radio Club', callSign: 'K0KRC' }) },
   { method: 'GET', path: '/api/clubs/:clubId/members', access: 'member' },
   {
     method: 'PATCH', path: '/api/clubs/:clubId/members/:userId', access: 'club.manage',

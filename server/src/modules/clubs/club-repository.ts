@@ -32,6 +32,10 @@ export class ClubRepository {
     return rows[0] ? toClub(rows[0]) : null;
   }
 
+  async update(clubId: string, changes: { name?: string; callSign?: string }): Promise<void> {
+    await this.dataSource.getRepository(ClubEntity).update({ id: clubId }, changes);
+  }
+
   async nameOf(clubId: string, manager: EntityManager = this.dataSource.manager): Promise<string | null> {
     const club = await manager.getRepository(ClubEntity).findOneBy({ id: clubId });
     return club?.name ?? null;

@@ -14,6 +14,12 @@ export class ClubService {
     return this.clubs.listForUser(userId);
   }
 
+  /** Renames the club or changes its call sign (club.manage). */
+  async update(clubId: string, userId: string, changes: { name?: string; callSign?: string }): Promise<Club> {
+    await this.clubs.update(clubId, changes);
+    return this.get(clubId, userId);
+  }
+
   async get(clubId: string, userId: string): Promise<Club> {
     const club = await this.clubs.getForUser(clubId, userId);
     if (!club) throw new AppError('not_found', 'not_found', 'club not found');

@@ -1,8 +1,9 @@
-// POST /api/clubs (creator becomes admin) · GET /api/clubs (mine, with my role) · GET /api/clubs/:clubId
+// POST /api/clubs (creator becomes admin) · GET /api/clubs (mine, with my role) · GET /api/clubs/:clubId ·
+// PATCH /api/clubs/:clubId {name?, callSign?} (club.manage)
 import { Router } from 'express';
-import { clubCreateSchema } from '../../../../shared/schemas';
+import { clubCreateSchema, clubUpdateSchema } from '../../../../shared/schemas';
 import type { AppDeps } from '../../app-deps';
-import { requireMembership, requireUser } from '../../http/auth';
+import { requireAbility, requireMembership, requireUser } from '../../http/auth';
 import { validate } from '../../http/validate';
 import { ClubRepository } from './club-repository';
 import { ClubService } from './club-service';
@@ -20,6 +21,9 @@ export function clubsRouter(deps: AppDeps): Router {
   });
   router.get('/:clubId', signedIn, requireMembership(deps), async (req, res) => {
     res.json(await service.get(req.membership!.clubId, req.user!.id));
+  });
+  router.patch('/:clubId', signedIn, requireMembership(deps), requireAbility('club.manage'), validate({ body: clubUpdateSchema }), async (req, res) => {
+    res.json(await service.update(req.membership!.clubId, req.user!.id, req.body));
   });
   return router;
 }
