@@ -81,6 +81,10 @@ const jobs = (url: string) => {
       if (!ds.isInitialized) await ds.initialize();
       return ds.query('SELECT id, name, state, retry_count, data FROM pgboss.job WHERE name = $1 ORDER BY created_on', [name]);
     },
+    async query<T>(sql: string, params: unknown[]): Promise<T[]> {
+      if (!ds.isInitialized) await ds.initialize();
+      return ds.query(sql, params);
+    },
     close: () => (ds.isInitialized ? ds.destroy() : Promise.resolve()),
   };
 };
@@ -154,6 +158,12 @@ describe('mail queue (pg-boss)', () => {
         return r.length > 0 && r;
       });
       expect(dead[0]!.data).toMatchObject({ to: 'lost@kestrel.test', subject: 'Never delivered' });
+      const kept: { days: number }[] = await table.query(
+        "SELECT extract(epoch FROM keep_until - now()) / 86400 AS days FROM pgboss.job WHERE name = $1",
+        [MAIL_DEAD_LETTER_QUEUE],
+      );
+      // pg-boss keeps a dead letter for twice the job's 14-day default retention (plans.js failJobs: keep_until + (keep_until - start_after)).
+      expect(Number(kept[0]!.days)).toBeGreaterThan(27);
       const [original] = await table.rows();
       expect(original).toMatchObject({ state: 'failed', retry_count: 1 });
       expect(peer.received).toHaveLength(0);

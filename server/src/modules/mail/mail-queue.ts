@@ -67,6 +67,8 @@ export class MailQueue {
     boss.on('error', (err) => logger.error({ err }, 'mail queue error'));
     await boss.start();
     const queueOptions = { retryLimit: retry.retryLimit, retryDelay: retry.retryDelaySeconds, retryBackoff: retry.retryBackoff };
+    // Nobody works the dead-letter queue: its jobs wait there, whole, for an operator. pg-boss keeps a dead letter for
+    // twice the original job's retention (14 days by default), so about four weeks.
     if (!(await boss.getQueue(MAIL_DEAD_LETTER_QUEUE))) await boss.createQueue(MAIL_DEAD_LETTER_QUEUE);
     if (!(await boss.getQueue(MAIL_QUEUE))) await boss.createQueue(MAIL_QUEUE, { name: MAIL_QUEUE, ...queueOptions, deadLetter: MAIL_DEAD_LETTER_QUEUE });
     return new MailQueue(boss, retry, logger);
