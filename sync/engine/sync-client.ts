@@ -232,16 +232,15 @@ export async function createSyncClient(opts: SyncClientOptions): Promise<SyncCli
       await write(collection, id, 'undelete', {}, {});
     },
     async get<C extends CollectionName>(collection: C, id: string, o: { includeDeleted?: boolean } = {}): Promise<StoredRecord<C> | null> {
-      const entry = await store.getRecord(collection, id);
-      if (!entry?.view || (entry.view.deletedAt && !o.includeDeleted)) return null;
-      return toRecord<C>(entry.view);
+      const view = await store.getView(collection, id);
+      if (!view || (view.deletedAt && !o.includeDeleted)) return null;
+      return toRecord<C>(view);
     },
     async list<C extends CollectionName>(collection: C, filter: RecordFilter = {}, o: { includeDeleted?: boolean } = {}): Promise<StoredRecord<C>[]> {
-      const rows = await store.listRecords(collection);
+      const views = await store.listViews(collection);
       const keys = Object.entries(filter);
-      return rows
-        .map((r) => r.view)
-        .filter((v): v is LocalView => v !== null && (o.includeDeleted || v.deletedAt === null))
+      return views
+        .filter((v) => o.includeDeleted || v.deletedAt === null)
         .filter((v) => keys.every(([k, want]) => v.fields[k] === want))
         .sort((a, b) => (a.createdAt < b.createdAt ? -1 : a.createdAt > b.createdAt ? 1 : a.id < b.id ? -1 : 1))
         .map((v) => toRecord<C>(v));

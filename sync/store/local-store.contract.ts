@@ -143,6 +143,10 @@ export function localStoreContract(label: string, open: OpenStore): void {
       expect(rows).toHaveLength(1);
       expect(rows[0].view?.deletedAt).toBe(new Date(2000).toISOString());
       expect(await store.listRecords('hazards')).toEqual([]);
+      const views = await store.listViews('supports');
+      expect(views).toEqual([rows[0].view]);
+      expect(await store.getView('supports', REC)).toEqual(rows[0].view);
+      expect(await store.getView('hazards', REC)).toBeNull();
     });
   });
 }

@@ -4,6 +4,7 @@ import { materialize } from './materialize';
 import {
   INITIAL_META,
   localRejectionSchema,
+  localViewSchema,
   outboxEntrySchema,
   recordEntrySchema,
   syncMetaSchema,
@@ -71,6 +72,20 @@ export function createStoreFromTx(run: RunTx, close: () => Promise<void>): Local
     async listRecords(collection) {
       const rows = await run('readonly', 'read', (tx) => tx.allRecords(collection));
       return rows.map((r) => recordEntrySchema.parse(r));
+    },
+    async listViews(collection) {
+      const rows = await run('readonly', 'read', (tx) => tx.allRecords(collection));
+      const views: LocalView[] = [];
+      for (const r of rows) {
+        const view = (r as { view?: unknown } | null)?.view;
+        if (view != null) views.push(localViewSchema.parse(view));
+      }
+      return views;
+    },
+    async getView(collection, id) {
+      const raw = await run('readonly', 'read', (tx) => tx.getRecord(collection, id));
+      const view = (raw as { view?: unknown } | undefined)?.view;
+      return view == null ? null : localViewSchema.parse(view);
     },
     writeLocal(draft: OutboxDraft, clubId: string, metaPatch?: Partial<SyncMeta>) {
       return run('readwrite', 'write-local', async (tx) => {

@@ -87,6 +87,9 @@ export type BeforeCommitHook = (operation: 'write-local' | 'mark-pushed' | 'appl
 export interface LocalStore {
   getRecord(collection: CollectionName, id: string): Promise<RecordEntry | null>;
   listRecords(collection: CollectionName): Promise<RecordEntry[]>;
+  /** Only what the app shows (cheaper than listRecords: the server copy is not parsed). */
+  listViews(collection: CollectionName): Promise<LocalView[]>;
+  getView(collection: CollectionName, id: string): Promise<LocalView | null>;
   /** Hand out the next mutation id, store the outbox entry and the record's new view. Returns the new view. */
   writeLocal(draft: OutboxDraft, clubId: string, meta?: Partial<SyncMeta>): Promise<{ mutationId: number; view: LocalView | null }>;
   /** Oldest first. */
