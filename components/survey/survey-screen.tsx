@@ -173,8 +173,9 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', alignItems: 'center', gap: spacing.s, marginBottom: spacing.m },
   phoneContent: { padding: spacing.l, paddingBottom: 96 },
   wideRow: { flexDirection: 'row', gap: spacing.xl, padding: spacing.xl },
-  widePlan: { flex: 3 },
-  wideSide: { flex: 2, maxWidth: 560 },
+  widePlan: { flex: 1, minWidth: 360 },
+  // Wide enough for a list row with its sync badge and for the forms' two-word choices.
+  wideSide: { width: 420, flexGrow: 0, flexShrink: 0 },
   sideContent: { paddingBottom: spacing.xxxl },
   notice: { flexDirection: 'row', alignItems: 'center', backgroundColor: colors.infoSoft, borderRadius: radii.m, paddingHorizontal: spacing.m, marginBottom: spacing.m, borderWidth: 1.5, borderColor: colors.info },
   caution: { marginTop: spacing.xl },

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import { addReading, averaged, type AveragedFix, type Fix } from '@/components/survey/placement/placement-logic';
+import { addReadingWhereStanding, averaged, type AveragedFix, type Fix } from '@/components/survey/placement/placement-logic';
 import { surveyGeo } from '@/components/survey/placement/survey-geo';
 import type { PositionReading } from './use-position';
 
@@ -11,7 +11,7 @@ export function useFixAveraging(latest: PositionReading | null, running: boolean
   const [readings, setReadings] = useState<Fix[]>([]);
   const startedAt = useRef(Date.now());
   useEffect(() => {
-    if (running && latest) setReadings((rs) => addReading(rs, latest, startedAt.current));
+    if (running && latest) setReadings((rs) => addReadingWhereStanding(rs, latest, startedAt.current, surveyGeo));
   }, [latest, running]);
   const fix = useMemo(() => averaged(readings, surveyGeo), [readings]);
   const restart = useCallback(() => {

@@ -242,7 +242,11 @@ describe('scout walk: recording a site on a phone with no network (390×844, emu
     const line = byLabel(all, 'Walk line')!;
     expect(line.fields).toMatchObject({ kind: 'power-line', voltageClass: 'distribution', voltageKv: 12.47, heightM: 8.5, isArea: false });
     expect(line.fields.points as LatLon[]).toHaveLength(3);
-    expect(byLabel(all, 'Walk tent')?.collection).toBe('operatingPositions');
+    const tent = byLabel(all, 'Walk tent')!;
+    expect(tent.collection).toBe('operatingPositions');
+    // Readings from where the scout stood before (the last power-line point, 200 m away) are not averaged in.
+    const tentFix = all.find((r) => r.collection === 'measurements' && r.fields.subjectId === tent.id && r.fields.kind === 'gps-fix');
+    expect(tentFix?.fields.valueM as number).toBeLessThan(8);
 
     for (const photo of all.filter((r) => r.collection === 'photos' && r.fields.subjectId === oak.id)) {
       await until(`photo ${String(photo.fields.sha256).slice(0, 8)} uploaded`, async () => {

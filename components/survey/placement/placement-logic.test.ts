@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_OFFSET_M, addReading, averaged, fixMeasurementInputs, offsetAccuracyM, placeByOffset, type PlacementGeo } from './placement-logic';
+import { MAX_OFFSET_M, addReading, addReadingWhereStanding, averaged, fixMeasurementInputs, offsetAccuracyM, placeByOffset, type PlacementGeo } from './placement-logic';
 
 // A stand-in for shared/geo that records what it was asked: this suite checks the rules around the
 // geodesy (which readings count, which inputs are refused), not the geodesy itself.
@@ -11,6 +11,7 @@ const geo: PlacementGeo = {
     const sw = w.reduce((a, b) => a + b, 0);
     return { lat: fixes.reduce((s, f, i) => s + f.lat * w[i], 0) / sw, lon: fixes.reduce((s, f, i) => s + f.lon * w[i], 0) / sw, accuracyM: 1 / Math.sqrt(sw) };
   },
+  distanceM: (a, b) => Math.hypot((a.lat - b.lat) * 111_000, (a.lon - b.lon) * 80_000),
   destination(from, distanceM, bearingDeg) {
     return { lat: from.lat + (distanceM * Math.cos((bearingDeg * Math.PI) / 180)) / 111_000, lon: from.lon + (distanceM * Math.sin((bearingDeg * Math.PI) / 180)) / 80_000 };
   },
@@ -33,6 +34,14 @@ describe('placement rules (fix averaging session, distance and bearing)', () => 
   it('ignores a reading taken well before the session started (where the scout stood before walking over)', () => {
     expect(addReading([], { lat: 1, lon: 2, accuracyM: 5, atMs: 1_000 }, 10_000)).toEqual([]);
     expect(addReading([], { lat: 1, lon: 2, accuracyM: 5, atMs: 7_000 }, 10_000)).toHaveLength(1);
+  });
+
+  it('a reading from clearly elsewhere (beyond 3× the accuracies) restarts the session there; a nearby one joins it', () => {
+    const here = [{ lat: 1, lon: 2, accuracyM: 5, atMs: 1 }, { lat: 1.00001, lon: 2, accuracyM: 5, atMs: 2 }];
+    const near = addReadingWhereStanding(here, { lat: 1.00005, lon: 2, accuracyM: 5, atMs: 3 }, 0, geo);
+    expect(near).toHaveLength(3);
+    const far = addReadingWhereStanding(here, { lat: 1.002, lon: 2, accuracyM: 5, atMs: 4 }, 0, geo);
+    expect(far).toEqual([{ lat: 1.002, lon: 2, accuracyM: 5, atMs: 4 }]);
   });
 
   it('the fix measurement keeps the count, best and worst readings and how long the scout waited', () => {

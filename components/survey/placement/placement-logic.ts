@@ -11,6 +11,7 @@ export type Fix = { lat: number; lon: number; accuracyM: number | null; atMs: nu
 export type AveragedFix = { lat: number; lon: number; accuracyM: number; count: number };
 
 export type PlacementGeo = {
+  distanceM(a: LatLon, b: LatLon): number;
   average(fixes: readonly { lat: number; lon: number; accuracyM: number }[]): { lat: number; lon: number; accuracyM: number };
   destination(from: LatLon, distanceM: number, bearingDeg: number): LatLon;
 };
@@ -32,6 +33,21 @@ export function addReading(readings: readonly Fix[], r: Fix, sessionStartMs = -I
   if (r.atMs < sessionStartMs - FRESH_READING_MS) return [...readings];
   if (readings.some((x) => x.atMs === r.atMs)) return [...readings];
   return [...readings, r];
+}
+
+/**
+ * A reading this far outside the session's average (in units of the two accuracies added) means the scout
+ * has walked on: averaging starts again from the new reading instead of blending two places (common practice).
+ */
+export const MOVED_FACTOR = 3;
+
+/** addReading, but a reading from somewhere clearly else restarts the session there. */
+export function addReadingWhereStanding(readings: readonly Fix[], r: Fix, sessionStartMs: number, geo: PlacementGeo): Fix[] {
+  const next = addReading(readings, r, sessionStartMs);
+  if (next.length === readings.length || readings.length === 0) return next;
+  const avg = averaged(readings, geo);
+  if (avg && r.accuracyM !== null && geo.distanceM(avg, r) > MOVED_FACTOR * (avg.accuracyM + r.accuracyM)) return [r];
+  return next;
 }
 
 export function averaged(readings: readonly Fix[], geo: PlacementGeo): AveragedFix | null {

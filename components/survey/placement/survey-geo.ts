@@ -1,4 +1,4 @@
-import { averageFixes, destination, toLocalEastNorth } from '../../../shared/geo';
+import { averageFixes, destination, distanceBearing, toLocalEastNorth } from '../../../shared/geo';
 import type { LatLon } from '../../../shared/schemas';
 import type { Projection } from '../plan/plan-features';
 import type { PlacementGeo } from './placement-logic';
@@ -10,6 +10,7 @@ export const surveyGeo: PlacementGeo = {
     return { lat: a.lat, lon: a.lon, accuracyM: a.uncertaintyM };
   },
   destination: (from, distanceM, bearingDeg) => destination(from, distanceM, bearingDeg),
+  distanceM: (a, b) => distanceBearing(a, b).distanceM,
 };
 
 /** East/north metres around the site's reference point (azimuthal equidistant, shared/geo). */
