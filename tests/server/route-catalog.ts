@@ -124,6 +124,13 @@ export const ROUTES: RouteSpec[] = [
   { method: 'POST', path: '/api/clubs/:clubId/sync/pull', access: 'member', body: () => ({ type: 'pull', ...versions, cursor: '0', limit: 10 }) },
   { method: 'GET', path: '/api/clubs/:clubId/sync/rejected', access: 'member' },
   { method: 'GET', path: '/api/clubs/:clubId/sync/conflicts', access: 'member' },
+
+  // ---- notification settings (H7b): each member reads and sets their own ----
+  { method: 'GET', path: '/api/clubs/:clubId/notification-settings', access: 'member' },
+  {
+    method: 'PUT', path: '/api/clubs/:clubId/notification-settings', access: 'member',
+    body: () => ({ reviewWaiting: true, spotSentBack: false, spotCleared: true, sheetReady: true }),
+  },
 ];
 
 export const routeName = (r: RouteSpec) => `${r.method} ${r.path}`;

@@ -10,6 +10,7 @@ import { clubInvitationsRouter } from './invitations/club-invitations-router';
 import { publicInvitationsRouter } from './invitations/public-invitations-router';
 import { devMailboxRouter } from './mail/dev-mailbox-router';
 import { membersRouter } from './members/router';
+import { notificationSettingsRouter } from './notifications/router';
 import { photosRouter } from './photos/router';
 import { sitesRouter } from './sites/router';
 import { syncRouter } from './sync/router';
@@ -32,4 +33,5 @@ export const MODULES: Module[] = [
   { mount: '/clubs/:clubId/events', router: eventsRouter },
   { mount: '/dev/mailbox', router: devMailboxRouter },
   { mount: '/clubs/:clubId/sync', router: syncRouter },
+  { mount: '/clubs/:clubId/notification-settings', router: notificationSettingsRouter },
 ];

@@ -3,5 +3,6 @@
 import { InitialSchema1796163364737 } from './1796163364737-initial-schema';
 import { PhotoUploads1796163535135 } from './1796163535135-photo-uploads';
 import { SyncBookkeeping1796170000000 } from './1796170000000-sync-bookkeeping';
+import { Notifications1796180000000 } from './1796180000000-notifications';
 
-export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135, SyncBookkeeping1796170000000];
+export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135, SyncBookkeeping1796170000000, Notifications1796180000000];

@@ -19,6 +19,7 @@ import { AppError } from '../../http/errors';
 import { mergeMutation, newRow, type FieldConflict } from './merge';
 import { rowFromJson, selectForUpdateSql, upsertSql, type RowState } from './row-codec';
 import { mayWrite } from '../../../../sync/protocol';
+import { runAfterApply, type AfterApplyHook } from './after-apply';
 
 export interface PushContext {
   clubId: string;
@@ -26,6 +27,8 @@ export interface PushContext {
   role: Role;
   nowMs: number;
   logger: Logger;
+  /** Run inside the transaction once the changed rows are written (notifications); none when omitted. */
+  afterApply?: readonly AfterApplyHook[];
 }
 
 export interface PushOutcome {
@@ -81,6 +84,7 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
     const found: { j: Record<string, unknown> }[] = await em.query(selectForUpdateSql(collection), [ids]);
     for (const f of found) rows.set(`${collection}/${f.j.id}`, rowFromJson(collection, f.j));
   }
+  const loaded = new Map(rows);
   // Ids are global; a row of another club is "not found" to this club.
   const foreign = new Set([...rows.entries()].filter(([, r]) => r.clubId !== ctx.clubId).map(([k]) => k));
 
@@ -162,6 +166,10 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
   for (const [collection, list] of dirtyByCollection) {
     const { sql, toJson } = upsertSql(collection);
     await em.query(sql, [JSON.stringify(list.map(toJson))]);
+  }
+  if (ctx.afterApply?.length) {
+    const changes = [...dirty].map((key) => ({ before: loaded.get(key) ?? null, after: rows.get(key)! }));
+    await runAfterApply(em, ctx.afterApply, { clubId: ctx.clubId, userId: ctx.userId, nowMs: ctx.nowMs, changes }, ctx.logger);
   }
   if (newRejections.length > 0) {
     await em.query(

@@ -19,6 +19,7 @@ import { requireMembership, requireUser } from '../../http/auth';
 import { AppError } from '../../http/errors';
 import { pullChanges } from './pull-service';
 import { applyPush } from './push-service';
+import { AFTER_APPLY_HOOKS } from './after-apply-hooks';
 
 const versionsOnly = z.object({ protocolVersion: z.number().int(), schemaVersion: z.number().int() });
 
@@ -35,6 +36,7 @@ const iso = (v: unknown) => new Date(String(v)).toISOString();
 export function syncRouter(deps: AppDeps): Router {
   const router = Router({ mergeParams: true });
   router.use(requireUser(deps), requireMembership(deps));
+  const afterApply = AFTER_APPLY_HOOKS.map((hook) => hook(deps));
 
   router.post('/push', async (req, res) => {
     const tooOld = versionAnswer(req.body);
@@ -42,7 +44,7 @@ export function syncRouter(deps: AppDeps): Router {
     const body = pushRequestSchema.parse(req.body);
     const m = req.membership!;
     const nowMs = deps.clock.now().getTime();
-    const outcome = await applyPush(deps.dataSource, body, { clubId: m.clubId, userId: m.userId, role: m.role, nowMs, logger: deps.logger });
+    const outcome = await applyPush(deps.dataSource, body, { clubId: m.clubId, userId: m.userId, role: m.role, nowMs, logger: deps.logger, afterApply });
     res.json({ type: 'pushed', lastAppliedMutationId: outcome.lastAppliedMutationId, rejected: outcome.rejected, serverTimeMs: deps.clock.now().getTime() } satisfies PushResponse);
   });
 
