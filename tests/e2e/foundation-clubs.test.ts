@@ -32,7 +32,7 @@ it('a scout starts a second club, is its admin there and still a scout in the de
   await byTestId(page, 'club-switcher-sheet').getByText(DEMO_CLUB).click();
   await byTestId(page, 'events-title').waitFor();
   await expect.poll(() => byTestId(page, 'current-role').innerText()).toContain('Scout');
-  await page.getByText('Autumn Field Day').first().waitFor();
+  await page.getByText('Midwinter Field Outing').first().waitFor();
 
   // The choice of club survives a reload (kept on this device).
   await page.reload();

@@ -29,7 +29,7 @@ describe.each(Object.keys(VIEWPORTS) as ViewportName[])('at the %s viewport', (v
       await expect.poll(() => byTestId(page, 'current-role').first().innerText()).toContain(ROLE_LABELS[role]);
       expect(await byTestId(page, 'club-switcher').first().innerText()).toContain(DEMO_CLUB.slice(0, 12));
       // The demo event is on everyone's home screen.
-      await page.getByText('Autumn Field Day', { exact: false }).first().waitFor();
+      await page.getByText('Midwinter Field Outing', { exact: false }).first().waitFor();
 
       let shown: string[];
       if (viewport === 'phone') {

@@ -107,7 +107,7 @@ export const DEMO_COAX: { key: string; fields: CollectionFields<'coax'> }[] = [
   { key: 'c3', fields: { label: 'Jumper bag', type: 'LMR-400', lengthM: 15, notes: '' } },
 ];
 
-export const DEMO_EVENT_NAME = 'Autumn Field Day 2026-style outing';
+export const DEMO_EVENT_NAME = 'Midwinter Field Outing';
 
 /** First Saturday at least three weeks after `today`, for two days: always an upcoming outing on first start. */
 export function demoEventDays(today: Date): { startsOn: string; endsOn: string } {
