@@ -113,11 +113,14 @@ async function runSeed(seed: number): Promise<void> {
     devices.push(await device.boot());
   }
 
-  const timing = { local: 0, sync: 0, syncs: 0, cpuMs: 0 };
+  const timing = { local: 0, sync: 0, syncs: 0, cpuMs: 0, localCpuMs: 0, syncCpuMs: 0 };
+  const cpuNow = () => { const u = process.cpuUsage(); return (u.user + u.system) / 1000; };
   const cpu0 = process.cpuUsage();
   const sync = async (d: SimDevice) => {
     const t0 = performance.now();
+    const c0 = cpuNow();
     await d.sync();
+    timing.syncCpuMs += cpuNow() - c0;
     timing.sync += performance.now() - t0;
     timing.syncs += 1;
     if (d.client.status().error?.message.includes('simulated power loss')) await d.restart();
@@ -133,13 +136,15 @@ async function runSeed(seed: number): Promise<void> {
     serverNowMs += Math.floor(rand() * 400) + (rand() < 0.01 ? 30_000 : 0);
 
     const t0 = performance.now();
-    const supports = await d.client.list('supports', {}, { includeDeleted: true });
-    const photos = await d.client.list('photos', {}, { includeDeleted: true });
-    const visible = [...supports.map((r) => ({ c: 'supports' as const, r })), ...photos.map((r) => ({ c: 'photos' as const, r }))];
+    const c0 = cpuNow();
+    // Roll the kind of operation first, then read only the collection it needs (reads are most of the cost).
+    const roll = rand();
+    const onPhotos = roll >= 0.15 && roll < 0.84 && rand() < 0.15;
+    const listed = await d.client.list(onPhotos ? 'photos' : 'supports', {}, { includeDeleted: true });
+    const visible = listed.map((r) => ({ c: onPhotos ? ('photos' as const) : ('supports' as const), r }));
     const alive = visible.filter((v) => v.r.deletedAt === null);
     const dead = visible.filter((v) => v.r.deletedAt !== null);
-    const unknown = poolIds.filter((id) => !supports.some((s) => s.id === id));
-    const roll = rand();
+    const unknown = onPhotos ? [] : poolIds.filter((id) => !listed.some((s) => s.id === id));
     if (roll < 0.15 && unknown.length > 0) {
       const id = unknown[Math.floor(rand() * unknown.length)];
       await d.client.create('supports', { siteId: SITE_ID, kind: rand() < 0.8 ? 'tree' : 'mast', label: `${LABELS[Math.floor(rand() * LABELS.length)]} ${tick}`, lat: 44.5 + rand() / 100, lon: -93.2 - rand() / 100, heightM: Math.round(rand() * 300) / 10 + 2 }, id);
@@ -152,8 +157,8 @@ async function runSeed(seed: number): Promise<void> {
     } else if (roll < 0.84 && dead.length > 0) {
       const v = dead[Math.floor(rand() * dead.length)];
       await d.client.undelete(v.c, v.r.id);
-    } else {
-      const target = alive.filter((v) => v.c === 'supports');
+    } else if (!onPhotos) {
+      const target = alive;
       if (target.length > 0) {
         const subject = target[Math.floor(rand() * target.length)].r.id;
         const sha = Array.from({ length: 64 }, () => Math.floor(rand() * 16).toString(16)).join('');
@@ -161,6 +166,7 @@ async function runSeed(seed: number): Promise<void> {
       }
     }
     timing.local += performance.now() - t0;
+    timing.localCpuMs += cpuNow() - c0;
     const after = rand();
     if (after < 0.06) await sync(d);
     else if (after < 0.07) await d.restart();
