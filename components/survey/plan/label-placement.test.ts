@@ -9,11 +9,18 @@ describe('plan label placement (greedy, no overlaps)', () => {
       { id: 'c', x: 100, y: 200, text: 'Gate walnut', priority: 1 },
       { id: 'line', x: 112, y: 98, text: 'County line (power line)', priority: 5 },
     ], 400, 400);
-    expect([...kept].sort()).toEqual(['c', 'line']);
+    expect([...kept.keys()].sort()).toEqual(['c', 'line']);
   });
 
   it('on a tie the first candidate wins; labels off the drawing are skipped', () => {
-    expect([...placeLabels([{ id: 'x', x: 50, y: 50, text: 'one', priority: 0 }, { id: 'y', x: 52, y: 50, text: 'two', priority: 0 }, { id: 'z', x: -300, y: 50, text: 'far', priority: 9 }], 200, 200)]).toEqual(['x']);
+    expect([...placeLabels([{ id: 'x', x: 50, y: 50, text: 'one', priority: 0 }, { id: 'y', x: 52, y: 50, text: 'two', priority: 0 }, { id: 'z', x: -300, y: 50, text: 'far', priority: 9 }], 200, 200).keys()]).toEqual(['x']);
+  });
+
+  it('a label near the right edge is shifted left to stay inside the drawing', () => {
+    const c = { id: 'l', x: 390, y: 50, text: 'County road line (power line)', priority: 5 };
+    const dx = placeLabels([c], 400, 200).get('l')!;
+    expect(dx).toBeLessThan(0);
+    expect(labelBox(c).x1 + dx).toBeCloseTo(400, 9);
   });
 
   it('a label box is centred on its anchor and grows with the text', () => {

@@ -17,17 +17,23 @@ export function labelBox(c: LabelCandidate): Box {
 
 const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
 
-/** Ids of the labels to draw. Higher priority wins; ties keep the input order. */
-export function placeLabels(candidates: readonly LabelCandidate[], widthPx: number, heightPx: number): Set<string> {
+/**
+ * The labels to draw, each with the sideways shift (px) that keeps it inside the drawing when its symbol sits
+ * near an edge. Higher priority wins; ties keep the input order.
+ */
+export function placeLabels(candidates: readonly LabelCandidate[], widthPx: number, heightPx: number): Map<string, number> {
   const order = candidates.map((c, i) => ({ c, i })).sort((a, b) => b.c.priority - a.c.priority || a.i - b.i);
   const kept: Box[] = [];
-  const ids = new Set<string>();
+  const out = new Map<string, number>();
   for (const { c } of order) {
-    const box = labelBox(c);
-    if (box.x1 < 0 || box.x0 > widthPx || box.y1 < 0 || box.y0 > heightPx) continue;
+    const raw = labelBox(c);
+    if (raw.x1 < 0 || raw.x0 > widthPx || raw.y1 < 0 || raw.y0 > heightPx) continue;
+    const w = raw.x1 - raw.x0;
+    const dx = w >= widthPx ? -raw.x0 : raw.x0 < 0 ? -raw.x0 : raw.x1 > widthPx ? widthPx - raw.x1 : 0;
+    const box = { ...raw, x0: raw.x0 + dx, x1: raw.x1 + dx };
     if (kept.some((k) => overlaps(k, box))) continue;
     kept.push(box);
-    ids.add(c.id);
+    out.set(c.id, dx);
   }
-  return ids;
+  return out;
 }

@@ -11,7 +11,8 @@ import type { ScreenPoint } from './plan-transform';
  * position a tent. Each has a text label on a pale halo so it reads over lines.
  */
 
-function Label({ at, text, dy = POINT_LABEL_DY, color = planColors.label }: { at: ScreenPoint; text: string; dy?: number; color?: string }) {
+function Label({ at, text, dy = POINT_LABEL_DY, dx = 0, color = planColors.label }: { at: ScreenPoint; text: string; dy?: number; dx?: number; color?: string }) {
+  at = { x: at.x + dx, y: at.y };
   return (
     <>
       <SvgText x={at.x} y={at.y + dy} fontSize={13} fontFamily={fonts.semibold} fontWeight="600" textAnchor="middle" stroke={planColors.halo} strokeWidth={4} strokeLinejoin="round">
@@ -32,7 +33,7 @@ function symbolAttrs(f: PlanFeature): object {
   return Platform.OS === 'web' ? { 'aria-label': f.label, 'data-testid': `plan-symbol-${f.id}` } : {};
 }
 
-export function PointSymbol({ feature, at, selected, showLabel = true }: { feature: Exclude<PlanFeature, HazardFeature>; at: ScreenPoint; selected: boolean; showLabel?: boolean }) {
+export function PointSymbol({ feature, at, selected, showLabel = true, labelDx = 0 }: { feature: Exclude<PlanFeature, HazardFeature>; at: ScreenPoint; selected: boolean; showLabel?: boolean; labelDx?: number }) {
   const ring = selected ? <Circle cx={at.x} cy={at.y} r={19} fill="none" stroke={planColors.selected} strokeWidth={3.5} /> : null;
   if (feature.type === 'position') {
     // A rounded square marked "OP": nothing else on the plan has this shape, and no triangle (the danger sign).
@@ -41,7 +42,7 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
         {ring}
         <Rect x={at.x - 12} y={at.y - 11} width={24} height={22} rx={5} fill={planColors.positionFill} stroke={planColors.position} strokeWidth={2.5} />
         <SvgText x={at.x} y={at.y + 4.5} fontSize={11} fontFamily={fonts.bold} fontWeight="700" textAnchor="middle" fill={planColors.position}>OP</SvgText>
-        {showLabel ? <Label at={at} text={feature.label} /> : null}
+        {showLabel ? <Label at={at} dx={labelDx} text={feature.label} /> : null}
       </G>
     );
   }
@@ -53,7 +54,7 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
         <Circle cx={at.x - 4} cy={at.y - 3} r={4.5} fill="none" stroke={planColors.tree} strokeWidth={1.5} />
         <Circle cx={at.x + 4.5} cy={at.y + 2} r={4} fill="none" stroke={planColors.tree} strokeWidth={1.5} />
         <Circle cx={at.x} cy={at.y} r={2.5} fill={planColors.tree} />
-        {showLabel ? <Label at={at} text={feature.label} /> : null}
+        {showLabel ? <Label at={at} dx={labelDx} text={feature.label} /> : null}
       </G>
     );
   }
@@ -64,7 +65,7 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
         <Polygon points={`${at.x},${at.y - 13} ${at.x + 11},${at.y + 9} ${at.x - 11},${at.y + 9}`} fill="#DFE8F8" stroke={planColors.mast} strokeWidth={2.5} strokeLinejoin="round" />
         <Line x1={at.x} y1={at.y - 13} x2={at.x} y2={at.y + 9} stroke={planColors.mast} strokeWidth={2} />
         <Circle cx={at.x} cy={at.y - 13} r={3} fill={planColors.mast} />
-        {showLabel ? <Label at={at} text={feature.label} /> : null}
+        {showLabel ? <Label at={at} dx={labelDx} text={feature.label} /> : null}
       </G>
     );
   }
@@ -73,12 +74,12 @@ export function PointSymbol({ feature, at, selected, showLabel = true }: { featu
       {ring}
       <Rect x={at.x - 10} y={at.y - 10} width={20} height={20} fill="#EAE1CF" stroke={planColors.structure} strokeWidth={2.5} />
       <Line x1={at.x - 10} y1={at.y - 10} x2={at.x + 10} y2={at.y + 10} stroke={planColors.structure} strokeWidth={1.5} />
-      {showLabel ? <Label at={at} text={feature.label} /> : null}
+      {showLabel ? <Label at={at} dx={labelDx} text={feature.label} /> : null}
     </G>
   );
 }
 
-export function HazardSymbol({ feature, points, selected, showLabel = true }: { feature: HazardFeature; points: ScreenPoint[]; selected: boolean; showLabel?: boolean }) {
+export function HazardSymbol({ feature, points, selected, showLabel = true, labelDx = 0 }: { feature: HazardFeature; points: ScreenPoint[]; selected: boolean; showLabel?: boolean; labelDx?: number }) {
   const look = HAZARD_LOOK[feature.kind];
   const pts = points.map((p) => `${p.x},${p.y}`).join(' ');
   const mid = midpoint(points);
@@ -94,7 +95,7 @@ export function HazardSymbol({ feature, points, selected, showLabel = true }: { 
       {shape}
       {isPower ? points.map((p, i) => <Circle key={i} cx={p.x} cy={p.y} r={5} fill="#FFFCF6" stroke={planColors.danger} strokeWidth={2.5} />) : null}
       {isPower && mid ? <Bolt at={mid} /> : null}
-      {mid && showLabel ? <Label at={mid} text={hazardLabelText(feature)} dy={hazardLabelDy(feature)} color={isPower ? planColors.danger : planColors.label} /> : null}
+      {mid && showLabel ? <Label at={mid} dx={labelDx} text={hazardLabelText(feature)} dy={hazardLabelDy(feature)} color={isPower ? planColors.danger : planColors.label} /> : null}
     </G>
   );
 }

@@ -52,7 +52,7 @@ export function SitePlan({ features, me, selected, onSelect, draft, height, test
   const onLayout = (e: LayoutChangeEvent) => setSize({ widthPx: Math.round(e.nativeEvent.layout.width), heightPx: Math.round(e.nativeEvent.layout.height) });
   const counts = countsOf(features);
   const shownLabels = useMemo(() => {
-    if (!view) return new Set<string>();
+    if (!view) return new Map<string, number>();
     const cands: LabelCandidate[] = features.map((f) => {
       const sel = selected?.id === f.id ? 100 : 0;
       if (f.type === 'hazard') {
@@ -83,13 +83,13 @@ export function SitePlan({ features, me, selected, onSelect, draft, height, test
             <RefMark at={worldToScreen(view, size, { eastM: 0, northM: 0 })} />
             {features.map((f) => {
               const isSel = !!selected && selected.id === f.id;
-              if (f.type === 'hazard') return <HazardSymbol key={f.id} feature={f} points={f.points.map((p) => worldToScreen(view, size, p))} selected={isSel} showLabel={shownLabels.has(f.id)} />;
+              if (f.type === 'hazard') return <HazardSymbol key={f.id} feature={f} points={f.points.map((p) => worldToScreen(view, size, p))} selected={isSel} showLabel={shownLabels.has(f.id)} labelDx={shownLabels.get(f.id)} />;
               return null;
             })}
             {overlay ? overlay((p) => worldToScreen(view, size, p), view.pxPerM) : null}
             {draft && draft.length > 0 ? <Draft points={draft.map((p) => worldToScreen(view, size, p))} /> : null}
             {me ? <Me at={worldToScreen(view, size, me.at)} radiusPx={(me.accuracyM ?? 0) * view.pxPerM} /> : null}
-            {features.map((f) => (f.type === 'hazard' ? null : <PointSymbol key={f.id} feature={f} at={worldToScreen(view, size, f.at)} selected={!!selected && selected.id === f.id} showLabel={shownLabels.has(f.id)} />))}
+            {features.map((f) => (f.type === 'hazard' ? null : <PointSymbol key={f.id} feature={f} at={worldToScreen(view, size, f.at)} selected={!!selected && selected.id === f.id} showLabel={shownLabels.has(f.id)} labelDx={shownLabels.get(f.id)} />))}
             <NorthArrow x={size.widthPx - 30} y={34} />
             <ScaleBarMark view={view} heightPx={size.heightPx} system={system} />
           </Svg>
