@@ -81,7 +81,7 @@ const wireMutation = (e: OutboxEntry) => ({
 
 export async function runSyncCycle(deps: EngineDeps): Promise<void> {
   const { store, transport, hlc } = deps;
-  const pushBatch = Math.min(deps.pushBatch ?? 500, MAX_PUSH_MUTATIONS);
+  const pushBatch = Math.min(deps.pushBatch ?? 200, MAX_PUSH_MUTATIONS);
   const pullLimit = Math.min(deps.pullLimit ?? 500, MAX_PULL_LIMIT);
   const learnTime = (serverTimeMs: number) => {
     const offset = serverTimeMs - deps.deviceNowMs();
@@ -89,16 +89,27 @@ export async function runSyncCycle(deps: EngineDeps): Promise<void> {
     return offset;
   };
 
+  let batchSize = pushBatch;
   for (;;) {
-    const batch = await store.pendingOutbox(pushBatch);
+    const batch = await store.pendingOutbox(batchSize);
     if (batch.length === 0) break;
-    const res: PushResponse = await transport.push({
-      type: 'push',
-      protocolVersion: PROTOCOL_VERSION,
-      schemaVersion: SCHEMA_VERSION,
-      deviceId: deps.deviceId,
-      mutations: batch.map(wireMutation),
-    });
+    let res: PushResponse;
+    try {
+      res = await transport.push({
+        type: 'push',
+        protocolVersion: PROTOCOL_VERSION,
+        schemaVersion: SCHEMA_VERSION,
+        deviceId: deps.deviceId,
+        mutations: batch.map(wireMutation),
+      });
+    } catch (err) {
+      // Too large for the server's body limit (many long power-line outlines): send smaller batches.
+      if (err instanceof TransportError && err.status === 413 && batchSize > 1) {
+        batchSize = Math.max(1, Math.floor(batchSize / 2));
+        continue;
+      }
+      throw err;
+    }
     if (res.type !== 'pushed') throw tooOld(res);
     const clockOffsetMs = learnTime(res.serverTimeMs);
     await store.markPushed(res.lastAppliedMutationId, res.rejected, { clockOffsetMs, hlcLast: hlc.last() });

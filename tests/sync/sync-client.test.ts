@@ -79,6 +79,27 @@ describe('sync client local writes', () => {
   });
 });
 
+describe('push batches', () => {
+  it('halves the batch when the server answers 413 (body too large) until it fits', async () => {
+    const server = fakeServer();
+    const sizes: number[] = [];
+    const transport: SyncTransport = {
+      push: async (req) => {
+        sizes.push(req.mutations.length);
+        if (req.mutations.length > 3) throw new TransportError('bad-request', 'payload too large', 413);
+        return server.transport.push(req);
+      },
+      pull: (req) => server.transport.pull(req),
+    };
+    const store = createMemoryStore();
+    const c = await client(store, transport, { pushBatch: 10 });
+    for (let i = 0; i < 7; i++) await c.create('supports', supportFields(`T${i}`));
+    await c.syncNow();
+    expect(sizes).toEqual([7, 5, 2, 2, 2, 1]); // batch size 10 → 5 → 2: the pending seven go 2 + 2 + 2 + 1
+    expect(await store.pendingCount()).toBe(0);
+  });
+});
+
 describe('sync triggers', () => {
   it('syncs on start, when the network comes back and when the tab is visible again; offline is a state, not an error', async () => {
     const server = fakeServer();
