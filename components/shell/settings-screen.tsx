@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '@/constants/theme';
 import { Card, Select, Screen, Tabular, Txt } from '@/components/ui';
 import { SignOutButton } from './sign-out-button';
+import { NotificationSettingsCard } from '@/components/settings-notifications/notification-settings-card';
 import { useSession } from '@/hooks/auth/use-session';
 import { useCurrentClub } from '@/hooks/use-current-club';
 import { useUnits } from '@/hooks/use-units';
@@ -34,6 +35,7 @@ export function SettingsScreen() {
           .
         </Txt>
       </Card>
+      <NotificationSettingsCard />
       {user ? (
         <Card title="You">
           <Txt variant="bodyStrong">
