@@ -8,3 +8,6 @@ export { spotFingerprint, fingerprintChanges } from './fingerprint';
 export type { FingerprintInputs } from './fingerprint';
 export { reviewSpot, decisionProblem } from './review-status';
 export type { ReviewResult, ResultReview, SpotReview, SpotReviewInputs, DecisionDraft } from './review-status';
+export { evaluateEventSpots, reviewResultsOf } from './spot-evaluation';
+export type { SpotEvaluation } from './spot-evaluation';
+export { spotSeparations } from './spot-separations';

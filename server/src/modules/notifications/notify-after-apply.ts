@@ -7,6 +7,7 @@ import { enqueueMail } from '../mail/mail-service';
 import type { AfterApplyHook, AppliedPush } from '../sync/after-apply';
 import { eventKey, spotEventsOf, type SpotEvent } from './notification-events';
 import { noticeMail, type NoticeItem } from './notification-mail';
+import { spotsClearedByDecisions } from '../review/cleared-by-decisions';
 import { claimEventKeys, recipientsOf, spotSummaries, type Recipient } from './notification-repository';
 
 /** Who hears of a spot event, by notification kind: a cleared spot tells the lead and readies the crews' sheets. */
@@ -21,6 +22,10 @@ export function notificationsAfterApply(deps: Pick<AppDeps, 'config' | 'mail' | 
     name: 'notifications',
     async run(em, push: AppliedPush) {
       const candidates = spotEventsOf(push.changes);
+      // Accepting the last open result clears a spot without its stored state changing: derived on the server.
+      for (const spotId of await spotsClearedByDecisions(em, push)) {
+        if (!candidates.some((c) => c.spotId === spotId && c.kind === 'spotCleared')) candidates.push({ kind: 'spotCleared', spotId });
+      }
       if (candidates.length === 0) return;
       const spots = await spotSummaries(em, push.clubId, [...new Set(candidates.map((e) => e.spotId))]);
       const live = candidates.filter((e) => spots.has(e.spotId));

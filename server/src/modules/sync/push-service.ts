@@ -20,6 +20,7 @@ import { mergeMutation, newRow, type FieldConflict } from './merge';
 import { rowFromJson, selectForUpdateSql, upsertSql, type RowState } from './row-codec';
 import { mayWrite } from '../../../../sync/protocol';
 import { runAfterApply, type AfterApplyHook } from './after-apply';
+import { createReviewGuard } from '../review/review-guard';
 
 export interface PushContext {
   clubId: string;
@@ -88,6 +89,7 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
   // Ids are global; a row of another club is "not found" to this club.
   const foreign = new Set([...rows.entries()].filter(([, r]) => r.clubId !== ctx.clubId).map(([k]) => k));
 
+  const reviewGuard = createReviewGuard(em, ctx.clubId, ctx.userId);
   const dirty = new Set<string>();
   const conflicts: PendingConflict[] = [];
   const newRejections: { m: Mutation; r: Rejection }[] = [];
@@ -132,6 +134,12 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
         const asEdit = checkEditedFields(m.collection, m.fields);
         if (asEdit.ok) refuse('not-found', `no such record in ${m.collection}: it may have been removed for good`);
         else refuse('invalid', checked.message, checked.details);
+        continue;
+      }
+      // A review decision is judged again here against the club's records (a blocked result is never accepted).
+      const reviewProblem = m.collection === 'reviewDecisions' ? await reviewGuard.check(checked.fields as Parameters<typeof reviewGuard.check>[0]) : null;
+      if (reviewProblem) {
+        refuse('invalid', reviewProblem);
         continue;
       }
       rows.set(key, newRow(m.collection, m.recordId, ctx.clubId, checked.fields, clock, nowIso));
