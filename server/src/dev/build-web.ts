@@ -3,6 +3,7 @@ import { existsSync, mkdirSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { buildServiceWorker } from './build-service-worker';
+import { buildPlanWorker } from './build-plan-worker';
 
 /*
  * Builds the web app with `expo export` into a folder the server can serve from the same origin.
@@ -47,6 +48,8 @@ export async function exportWeb({ outDir, quiet }: BuildWebOptions): Promise<voi
 export async function buildWeb(options: BuildWebOptions): Promise<{ outDir: string }> {
   const outDir = path.resolve(repoRoot, options.outDir);
   await exportWeb({ ...options, outDir });
+  // The planning Web Worker (H7), bundled on its own; before the service worker so it is precached.
+  await buildPlanWorker(outDir);
   // The service worker (H5b) precaches what the export wrote, so it must run last.
   await buildServiceWorker(outDir);
   return { outDir };
