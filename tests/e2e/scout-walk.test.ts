@@ -190,6 +190,14 @@ describe('scout walk: recording a site on a phone with no network (390×844, emu
     await tid('survey-undo').click();
     await expect.poll(() => page.getByText('Walk tent', { exact: true }).count()).toBeGreaterThan(0);
 
+    // Edit a record: only the changed field is written.
+    await page.getByText('Walk oak', { exact: true }).first().click();
+    await tid('record-edit').click();
+    await tid('support-species').fill('swamp white oak');
+    await tid('support-save').click();
+    await expect.poll(() => tid('record-detail').textContent()).toContain('swamp white oak');
+    await toList();
+
     // ---- reload with no network: everything is still on the phone ----
     await page.reload();
     await expect.poll(() => tid('survey-title').textContent(), { timeout: 60_000 }).toBe(DEMO_SITE);
@@ -223,7 +231,7 @@ describe('scout walk: recording a site on a phone with no network (390×844, emu
     }, 120_000);
     const oak = byLabel(all, 'Walk oak')!;
     expect(oak.collection).toBe('supports');
-    expect(oak.fields).toMatchObject({ kind: 'tree', launchMethod: 'throw-bag', species: 'bur oak', siteId });
+    expect(oak.fields).toMatchObject({ kind: 'tree', launchMethod: 'throw-bag', species: 'swamp white oak', condition: 'Lowest clear branch at 6 m; no dead limbs', siteId });
     expect(oak.fields.heightM as number).toBeCloseTo(20 * Math.tan((35 * Math.PI) / 180) + 1.6, 6);
     // 80 % of the tree (shared/heights default, common practice) is within a throw bag's reach.
     expect(oak.fields.attachHeightM as number).toBeCloseTo(12.5, 1);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CAUTION_LINES } from '../../../shared/clearance/cautions';
-import { POWER_LINE_CAUTION, VOLTAGE_HELP, checkHazard, emptyHazardDraft } from './hazard-form-logic';
+import { POWER_LINE_CAUTION, VOLTAGE_HELP, checkHazard, draftFromHazard, emptyHazardDraft } from './hazard-form-logic';
 
 const siteId = '11111111-1111-4111-8111-111111111111';
 const m = (v: number) => v;
@@ -11,6 +11,11 @@ describe('hazard form logic (shared hazardFieldsSchema + power-line questions)',
     const r = checkHazard({ ...emptyHazardDraft('power-line'), label: 'Road line', points: pts(3), heightText: '9', voltageClass: 'distribution', voltageKvText: '12.47' }, siteId, m);
     expect(r.errors).toEqual({});
     expect(r.fields).toMatchObject({ kind: 'power-line', heightM: 9, voltageClass: 'distribution', voltageKv: 12.47, isArea: false });
+  });
+
+  it('opening and saving a power line unchanged keeps its stored height exactly', () => {
+    const stored = checkHazard({ ...emptyHazardDraft('power-line'), label: 'L', points: pts(2), heightText: '9.4488' }, siteId, m).fields!;
+    expect(checkHazard(draftFromHazard(stored, (x) => x / 0.3048), siteId, (v) => v * 0.3048).fields!.heightM).toBe(stored.heightM);
   });
 
   it('a power line with one point is refused (the schema needs two)', () => {

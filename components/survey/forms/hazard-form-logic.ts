@@ -15,6 +15,8 @@ export type HazardDraft = {
   voltageClass: VoltageClass | null;
   voltageKvText: string;
   notes: string;
+  /** The stored height as first shown (rounded); left unchanged, the stored metres are kept exactly. */
+  shownHeight?: { text: string; m: number };
 };
 
 /** Which kinds are outlines by default: a parking area, a building and a pond are areas; lines are lines. */
@@ -48,7 +50,8 @@ export function checkHazard(draft: HazardDraft, siteId: string, toM: (v: number)
   let heightM: number | null = null;
   if (draft.heightText.trim() !== '') {
     const v = parseDecimal(draft.heightText);
-    if (v === null) errors.heightM = 'Type the height as a number, for example 9';
+    if (draft.shownHeight && draft.heightText === draft.shownHeight.text) heightM = draft.shownHeight.m;
+    else if (v === null) errors.heightM = 'Type the height as a number, for example 9';
     else heightM = toM(v);
   }
   let voltageKv: number | null = null;
@@ -74,8 +77,10 @@ export function checkHazard(draft: HazardDraft, siteId: string, toM: (v: number)
 }
 
 export function draftFromHazard(h: HazardFields, fromM: (m: number) => number): HazardDraft {
+  const heightText = h.heightM === null ? '' : String(Math.round(fromM(h.heightM) * 10) / 10);
   return {
-    kind: h.kind, label: h.label, points: h.points, isArea: h.isArea, heightText: h.heightM === null ? '' : String(Math.round(fromM(h.heightM) * 10) / 10),
+    shownHeight: h.heightM === null ? undefined : { text: heightText, m: h.heightM },
+    kind: h.kind, label: h.label, points: h.points, isArea: h.isArea, heightText,
     voltageClass: h.voltageClass, voltageKvText: h.voltageKv === null ? '' : String(h.voltageKv), notes: h.notes,
   };
 }

@@ -46,6 +46,15 @@ describe('support form logic (shared supportFieldsSchema + plausibility question
     expect(checkSupport(placed({ positionAccuracyM: 600 }), siteId, metres).errors.positionAccuracyM).toMatch(/500 m/);
   });
 
+  it('opening and saving a support unchanged keeps its measured metres exactly (no rounding to the shown digits)', () => {
+    const stored = checkSupport(placed({ heightText: '15.604150764', attachHeightText: '12.4833' }), siteId, metres).fields!;
+    const again = checkSupport(draftFromSupport(stored, (x) => x), siteId, metres).fields!;
+    expect(again.heightM).toBe(stored.heightM);
+    expect(again.attachHeightM).toBe(stored.attachHeightM);
+    const edited = checkSupport({ ...draftFromSupport(stored, (x) => x), heightText: '16' }, siteId, metres).fields!;
+    expect(edited.heightM).toBe(16);
+  });
+
   it('a stored support comes back into the form in the person’s units', () => {
     const r = checkSupport(placed({ heightText: '18.3' }), siteId, metres);
     const d = draftFromSupport(r.fields!, (m) => m / M_PER_FT);

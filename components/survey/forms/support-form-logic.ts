@@ -27,6 +27,11 @@ export type SupportDraft = {
   condition: string;
   mastModel: string;
   notes: string;
+  /**
+   * Stored lengths as first shown in the form (rounded for reading). When the text is left as shown, the
+   * stored metres are kept exactly: opening and saving a record never rounds what was measured.
+   */
+  shown?: Partial<Record<'heightM' | 'attachHeightM', { text: string; m: number }>>;
 };
 
 export const emptySupportDraft = (kind: SupportKind = 'tree'): SupportDraft => ({
@@ -43,8 +48,9 @@ export const POOR_FIX_QUESTION_M = 15;
 
 export type SiteContext = { siteSpanM: number | null };
 
-function lengthOrError(text: string, toM: (v: number) => number, what: string, errors: Record<string, string>, key: string): number | null {
+function lengthOrError(text: string, toM: (v: number) => number, what: string, errors: Record<string, string>, key: string, shown?: { text: string; m: number }): number | null {
   if (text.trim() === '') return null;
+  if (shown && text === shown.text) return shown.m;
   const v = parseDecimal(text);
   if (v === null) { errors[key] = `Type the ${what} as a number, for example 12.5`; return null; }
   return toM(v);
@@ -53,8 +59,8 @@ function lengthOrError(text: string, toM: (v: number) => number, what: string, e
 export function checkSupport(draft: SupportDraft, siteId: string, toM: (v: number) => number, ctx: SiteContext = { siteSpanM: null }): FormCheck<SupportFields> {
   const errors: Record<string, string> = {};
   const questions: string[] = [];
-  const heightM = lengthOrError(draft.heightText, toM, 'height', errors, 'heightM');
-  const attachHeightM = lengthOrError(draft.attachHeightText, toM, 'attachment height', errors, 'attachHeightM');
+  const heightM = lengthOrError(draft.heightText, toM, 'height', errors, 'heightM', draft.shown?.heightM);
+  const attachHeightM = lengthOrError(draft.attachHeightText, toM, 'attachment height', errors, 'attachHeightM', draft.shown?.attachHeightM);
   const maxEnds = parseDecimal(draft.maxEndsText);
   if (draft.lat === null || draft.lon === null) errors.lat = errors.lon = 'Place the support: take a GPS fix here, or give distance and bearing from where you stand';
   if (heightM !== null && attachHeightM !== null && attachHeightM > heightM) errors.attachHeightM = 'The attachment point cannot be higher than the support itself';
@@ -84,7 +90,11 @@ export function checkSupport(draft: SupportDraft, siteId: string, toM: (v: numbe
 /** A stored support back into a draft for editing, in the person's units. */
 export function draftFromSupport(s: SupportFields, fromM: (m: number) => number): SupportDraft {
   const txt = (m: number | null) => (m === null ? '' : String(Math.round(fromM(m) * 10) / 10));
+  const shown: SupportDraft['shown'] = {};
+  if (s.heightM !== null) shown.heightM = { text: txt(s.heightM), m: s.heightM };
+  if (s.attachHeightM !== null) shown.attachHeightM = { text: txt(s.attachHeightM), m: s.attachHeightM };
   return {
+    shown,
     kind: s.kind, label: s.label, lat: s.lat, lon: s.lon, positionAccuracyM: s.positionAccuracyM, heightText: txt(s.heightM), attachHeightText: txt(s.attachHeightM),
     launchMethod: s.launchMethod, maxEndsText: String(s.maxEnds), species: s.species, condition: s.condition, mastModel: s.mastModel, notes: s.notes,
   };
