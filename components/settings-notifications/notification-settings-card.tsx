@@ -46,9 +46,8 @@ export function NotificationSettingsCard() {
                 value={on}
                 onValueChange={(v) => toggle(kind, v)}
                 disabled={save.isPending}
+                // Switch already says it is a switch and whether it is on (on the web, through its checkbox input).
                 accessibilityLabel={`E-mail me: ${label.title}`}
-                accessibilityRole="switch"
-                accessibilityState={{ checked: on, disabled: save.isPending }}
                 testID={`settings-notifications-${kind}`}
                 trackColor={{ false: colors.lineSoft, true: colors.action }}
                 thumbColor={colors.surface}
