@@ -175,6 +175,27 @@ describe('sync push', () => {
   });
 });
 
+describe('sync routes: who may call them', () => {
+  it('answers 401 without a sign-in and 404 to a non-member on every sync route; a member’s role is checked per change instead', async () => {
+    const outsider = await app.signUpUser();
+    const routes: [string, string, unknown?][] = [
+      ['POST', 'push', { type: 'push', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, deviceId: 'x', mutations: [] }],
+      ['POST', 'pull', { type: 'pull', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, cursor: '0', limit: 10 }],
+      ['GET', 'conflicts'],
+      ['GET', 'rejected'],
+    ];
+    for (const [method, path, body] of routes) {
+      const anonymous = await app.api(method, `/api/clubs/${clubId}/sync/${path}`, { body });
+      expect(anonymous.status, `${method} ${path} without sign-in`).toBe(401);
+      const foreign = await app.api(method, `/api/clubs/${clubId}/sync/${path}`, { body, auth: outsider });
+      expect(foreign.status, `${method} ${path} by a non-member`).toBe(404);
+      expect(foreign.body).toMatchObject({ code: 'not_found' });
+      const member = await app.api(method, `/api/clubs/${clubId}/sync/${path}`, { body, auth: crew });
+      expect(member.status, `${method} ${path} by a member`).toBe(200);
+    }
+  });
+});
+
 describe('delete against a concurrent edit (deletion state has its own clock; an edit never changes it)', () => {
   for (const order of ['delete first', 'edit first'] as const) {
     it(`ends deleted with the edit kept inside, on the server and both devices (${order})`, async () => {
