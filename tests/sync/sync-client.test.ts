@@ -42,7 +42,7 @@ class FakeTarget {
   }
 }
 
-async function client(store: LocalStore = createMemoryStore(), transport = fakeServer().transport, extra = {}) {
+async function client(store: LocalStore = createMemoryStore(), transport: SyncTransport = fakeServer().transport, extra = {}) {
   return createSyncClient({ store, transport, clock: { nowMs: () => 1_000 }, random: () => 0.5, deviceId: 'unit-device', clubId: CLUB, timers: manualTimers, ...extra });
 }
 
