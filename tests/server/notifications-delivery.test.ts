@@ -121,11 +121,12 @@ describe('notifications on applied sync pushes', () => {
     expect(inbox(lead).length - before[lead.email]).toBe(1);
   });
 
-  it('an accept decision alone announces nothing (the spot is cleared when its state says so)', async () => {
+  it('an accept the server refuses (the result is not on the spot: its supports were never recorded) announces nothing', async () => {
     const [a] = await plannedSpots(1);
     await push(app, clubId, leadPhone, [setState(a, 'waiting-review')], nowMs);
     const before = countsByPerson();
-    await push(app, clubId, safetyPhone, [decision(a, safety, 'accept', nowMs)], nowMs);
+    const answer = await push(app, clubId, safetyPhone, [decision(a, safety, 'accept', nowMs)], nowMs);
+    expect(answer.rejected.map((r) => r.code)).toEqual(['invalid']);
     expect(newMailTo(before)).toEqual([]);
   });
 
