@@ -1,18 +1,17 @@
-import { parseArgs } from 'node:util';
 import { planSite } from '../../../shared/plan';
 import { assignmentText } from '../../../shared/plan/plan-text';
+import { parseFlags } from '../cli-args';
 import { readSite } from './propose';
 
 export const summary = 'choose one antenna spot per station from a site file: assign --site <file> [--json]';
 
 export async function run(argv: string[]): Promise<number> {
-  let values: { site?: string; json?: boolean };
-  try {
-    ({ values } = parseArgs({ args: argv, options: { site: { type: 'string' }, json: { type: 'boolean' } }, strict: true, allowPositionals: false }));
-  } catch (err) {
-    console.error(`assign: ${err instanceof Error ? err.message : String(err)}`);
+  const parsed = parseFlags(argv, { site: { type: 'string' }, json: { type: 'boolean' } }, summary.slice(summary.indexOf(': ') + 2));
+  if ('error' in parsed) {
+    console.error(`assign: ${parsed.error}`);
     return 2;
   }
+  const values = parsed.values as { site?: string; json?: boolean };
   if (!values.site) {
     console.error('assign: --site <file> is required');
     return 2;

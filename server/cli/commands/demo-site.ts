@@ -1,22 +1,16 @@
 import { writeFileSync } from 'node:fs';
-import { parseArgs } from 'node:util';
 import { generateDemoSite, seededRandom } from '../../../shared/plan';
+import { parseFlags } from '../cli-args';
 
 export const summary = 'write a generated site file of an invented park: demo-site --supports <n> --seed <s> [--out <file>]';
 
 export async function run(argv: string[]): Promise<number> {
-  let values: { supports?: string; seed?: string; out?: string };
-  try {
-    ({ values } = parseArgs({
-      args: argv,
-      options: { supports: { type: 'string' }, seed: { type: 'string' }, out: { type: 'string' } },
-      strict: true,
-      allowPositionals: false,
-    }));
-  } catch (err) {
-    console.error(`demo-site: ${err instanceof Error ? err.message : String(err)}`);
+  const parsed = parseFlags(argv, { supports: { type: 'string' }, seed: { type: 'string' }, out: { type: 'string' } }, summary.slice(summary.indexOf(': ') + 2));
+  if ('error' in parsed) {
+    console.error(`demo-site: ${parsed.error}`);
     return 2;
   }
+  const values = parsed.values as { supports?: string; seed?: string; out?: string };
   const supports = Number(values.supports);
   const seed = Number(values.seed);
   if (values.supports === undefined || !Number.isInteger(supports) || supports < 1 || supports > 5000) {

@@ -1,4 +1,4 @@
-import { parseArgs } from 'node:util';
+import { parseFlags } from '../cli-args';
 import { customGround, groundFromClass, GROUND_CLASS_NAMES, type Ground } from '../../../shared/ground';
 import { dipoleInputSchema, elevationCut, summarizePattern, type DipoleInput } from '../../../shared/pattern';
 import { halfWaveCutM } from '../../../shared/wire';
@@ -36,29 +36,25 @@ function number(v: string | undefined, flag: string): number | undefined | Error
 }
 
 export async function run(argv: string[]): Promise<number> {
-  let values: Record<string, string | boolean | undefined>;
-  try {
-    ({ values } = parseArgs({
-      args: argv,
-      options: {
-        mhz: { type: 'string' },
-        'height-m': { type: 'string' },
-        ground: { type: 'string' },
-        sigma: { type: 'string' },
-        epsr: { type: 'string' },
-        'length-m': { type: 'string' },
-        shape: { type: 'string' },
-        'apex-deg': { type: 'string' },
-        'step-deg': { type: 'string' },
-        json: { type: 'boolean' },
-        help: { type: 'boolean', short: 'h' },
-      },
-      strict: true,
-      allowPositionals: false,
-    }));
-  } catch (err) {
-    return fail(err instanceof Error ? err.message : String(err));
-  }
+  const flags = parseFlags(
+    argv,
+    {
+      mhz: { type: 'string' },
+      'height-m': { type: 'string' },
+      ground: { type: 'string' },
+      sigma: { type: 'string' },
+      epsr: { type: 'string' },
+      'length-m': { type: 'string' },
+      shape: { type: 'string' },
+      'apex-deg': { type: 'string' },
+      'step-deg': { type: 'string' },
+      json: { type: 'boolean' },
+      help: { type: 'boolean', short: 'h' },
+    },
+    summary.slice(summary.indexOf(': ') + 2),
+  );
+  if ('error' in flags) return fail(flags.error);
+  const values = flags.values;
   if (values.help) {
     console.log(HELP);
     return 0;

@@ -1,5 +1,5 @@
 import { readFileSync } from 'node:fs';
-import { parseArgs } from 'node:util';
+import { parseFlags } from '../cli-args';
 import { planSite } from '../../../shared/plan';
 import { proposalText } from '../../../shared/plan/plan-text';
 import { parseSiteFile } from '../../../shared/schemas/site-file';
@@ -7,18 +7,12 @@ import { parseSiteFile } from '../../../shared/schemas/site-file';
 export const summary = 'rank antenna spots per station from a site file: propose --site <file> [--station <id>] [--top <n>] [--json]';
 
 export async function run(argv: string[]): Promise<number> {
-  let values: { site?: string; station?: string; top?: string; json?: boolean };
-  try {
-    ({ values } = parseArgs({
-      args: argv,
-      options: { site: { type: 'string' }, station: { type: 'string' }, top: { type: 'string' }, json: { type: 'boolean' } },
-      strict: true,
-      allowPositionals: false,
-    }));
-  } catch (err) {
-    console.error(`propose: ${err instanceof Error ? err.message : String(err)}`);
+  const parsed = parseFlags(argv, { site: { type: 'string' }, station: { type: 'string' }, top: { type: 'string' }, json: { type: 'boolean' } }, summary.slice(summary.indexOf(': ') + 2));
+  if ('error' in parsed) {
+    console.error(`propose: ${parsed.error}`);
     return 2;
   }
+  const values = parsed.values as { site?: string; station?: string; top?: string; json?: boolean };
   if (!values.site) {
     console.error('propose: --site <file> is required');
     return 2;
