@@ -1,4 +1,4 @@
-import { StyleSheet, Switch, View } from 'react-native';
+import { Platform, StyleSheet, Switch, View } from 'react-native';
 import { colors, spacing } from '@/constants/theme';
 import { Card, ErrorText, Txt } from '@/components/ui';
 import { errorMessage } from '@/hooks/api/client';
@@ -49,8 +49,9 @@ export function NotificationSettingsCard() {
                 // Switch already says it is a switch and whether it is on (on the web, through its checkbox input).
                 accessibilityLabel={`E-mail me: ${label.title}`}
                 testID={`settings-notifications-${kind}`}
-                trackColor={{ false: colors.lineSoft, true: colors.action }}
+                trackColor={{ false: colors.line, true: colors.action }}
                 thumbColor={colors.surface}
+                style={styles.switch}
               />
             </View>
           );
@@ -64,4 +65,6 @@ export function NotificationSettingsCard() {
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: spacing.m, paddingVertical: spacing.s, minHeight: 48 },
   words: { flex: 1, gap: spacing.xxs },
+  // The web switch is 20 px tall by default: too small for a thumb in a field. Native switches keep their own size.
+  switch: Platform.select({ web: { height: 30 }, default: {} }),
 });
