@@ -2,6 +2,8 @@
 // record valid against the shared zod schemas.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { COLLECTIONS, type CollectionName } from '../../shared/schemas';
+import { planSite } from '../../shared/plan';
+import { siteFileFromRecords, type SiteRecords } from '../../shared/review/records-to-site-file';
 import { demoEventDays } from '../../server/src/dev/demo-scenario';
 import { seedDemo } from '../../server/src/dev/seed-demo';
 import { SYNCED_ENTITIES } from '../../server/src/db/entities';
@@ -42,6 +44,24 @@ describe('seedDemo', () => {
     const shape = (COLLECTIONS.supports.fields as unknown as { shape: Record<string, unknown> }).shape;
     expect(Object.keys(support.fieldClocks).sort()).toEqual(Object.keys(shape).sort());
   });
+
+  it('the demo plan finds coax for every antenna it places (the club does not open the demo to "bring more")', async () => {
+    await seedDemo(t.deps);
+    const all = async (c: CollectionName) => (await t.deps.dataSource.getRepository(SYNCED_ENTITIES[c]).find()) as never[];
+    const [site] = (await all('sites')) as SiteRecords['site'][];
+    const records: SiteRecords = {
+      site,
+      supports: await all('supports'),
+      hazards: await all('hazards'),
+      operatingPositions: await all('operatingPositions'),
+      stations: await all('stations'),
+      coax: await all('coax'),
+    };
+    const plan = planSite(siteFileFromRecords(records).file);
+    const placed = plan.assignment.spots.filter((s) => s.candidate);
+    expect(placed.length).toBeGreaterThan(0);
+    for (const s of placed) expect(s.coaxPieceIds.length, `${s.needKey}: ${s.coaxNote ?? ''}`).toBeGreaterThan(0);
+  }, 60_000);
 
   it('the outing starts on the first Saturday at least three weeks out and lasts two days', () => {
     expect(demoEventDays(new Date('2026-12-01T12:00:00Z'))).toEqual({ startsOn: '2026-12-26', endsOn: '2026-12-27' });

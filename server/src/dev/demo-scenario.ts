@@ -105,6 +105,14 @@ export const DEMO_COAX: { key: string; fields: CollectionFields<'coax'> }[] = [
   { key: 'c1', fields: { label: 'Reel A', type: 'RG-213', lengthM: 30, notes: '' } },
   { key: 'c2', fields: { label: 'Reel B', type: 'RG-8X', lengthM: 25, notes: '' } },
   { key: 'c3', fields: { label: 'Jumper bag', type: 'LMR-400', lengthM: 15, notes: '' } },
+  // Enough reels for every antenna the demo plan chooses (its spots need runs of about 35–95 m): with only the
+  // three above, the demo plan told four of five antennas to "bring more" coax.
+  { key: 'c4', fields: { label: 'Reel C', type: 'RG-213', lengthM: 60, notes: '' } },
+  { key: 'c5', fields: { label: 'Reel D', type: 'RG-213', lengthM: 50, notes: '' } },
+  { key: 'c6', fields: { label: 'Reel E', type: 'RG-213', lengthM: 45, notes: '' } },
+  { key: 'c7', fields: { label: 'Reel F', type: 'RG-8X', lengthM: 30, notes: 'Light reel for the high bands' } },
+  { key: 'c8', fields: { label: 'Reel G', type: 'RG-213', lengthM: 60, notes: '' } },
+  { key: 'c9', fields: { label: 'Long reel', type: 'RG-213', lengthM: 75, notes: 'Heavy: two people to carry' } },
 ];
 
 export const DEMO_EVENT_NAME = 'Midwinter Field Outing';
