@@ -6,6 +6,7 @@ import type { SeparationResult } from '@/shared/plan';
 import type { AntennaSpot, Station } from '@/shared/schemas';
 import type { SpotEvaluation } from '@/shared/review';
 import { ClearanceBadge, SpotStateBadge } from './spot-state-badge';
+import { withLabels } from './label-ids';
 
 type Props = {
   spots: SpotEvaluation[];
@@ -18,10 +19,11 @@ type Props = {
   onOpen: (s: SpotEvaluation) => void;
   onRemove: (spot: AntennaSpot) => void;
   assignMessage: string | null;
+  labels: ReadonlyMap<string, string>;
 };
 
 /** The spots chosen for the event, their review state, and the separation between them. */
-export function AssignmentsCard({ spots, stations, separations, plan, canPlan, onAssignAll, onSendForReview, onOpen, onRemove, assignMessage }: Props) {
+export function AssignmentsCard({ spots, stations, separations, plan, canPlan, onAssignAll, onSendForReview, onOpen, onRemove, assignMessage, labels }: Props) {
   const stationName = (id: string) => stations.find((s) => s.id === id)?.name ?? 'A removed station';
   const explanation = plan.status === 'done' ? plan.result.assignment.spots : [];
   const warnings = separations.filter((s) => s.level !== 'clear');
@@ -38,7 +40,8 @@ export function AssignmentsCard({ spots, stations, separations, plan, canPlan, o
       {assignMessage ? <Txt testID="plan-assign-message" color={colors.ok}>{assignMessage}</Txt> : null}
       {spots.length === 0 ? <Txt color={colors.inkMuted}>No spots chosen yet. Use “Assign all stations”, or open a candidate below and assign it.</Txt> : null}
       {spots.map((s) => {
-        const canSend = canPlan && (s.spot.state === 'planned' || s.review.state === 'sent-back') && s.evaluated !== null;
+        // Sent once per placement: a spot sent back must move (which makes it planned again) before it goes back.
+        const canSend = canPlan && s.spot.state === 'planned' && s.evaluated !== null;
         return (
           <View key={s.spot.id} style={styles.spot} testID={`assignment-${s.spot.stationId}-${s.spot.band}`}>
             <View style={styles.line}>
@@ -62,7 +65,7 @@ export function AssignmentsCard({ spots, stations, separations, plan, canPlan, o
           {warnings.map((w) => (
             <View key={w.key} style={styles.line}>
               <ClearanceBadge level={w.level} />
-              <Txt variant="caption" style={styles.flex}>{w.message}</Txt>
+              <Txt variant="caption" style={styles.flex}>{withLabels(w.message, labels)}</Txt>
             </View>
           ))}
         </View>
@@ -72,7 +75,7 @@ export function AssignmentsCard({ spots, stations, separations, plan, canPlan, o
           <Txt variant="label">How “assign all stations” chose</Txt>
           <Txt variant="caption">{plan.status === 'done' ? `${plan.result.assignment.exact ? 'Exact search' : 'Best found by a heuristic search'} over every station’s usable spots, for the highest total score without sharing a support beyond its ends or crowding each other.` : ''}</Txt>
           {explanation.map((e) => (
-            <Txt key={e.needKey} variant="caption">• {stationName(e.stationId)} {e.band}: {[...e.limitedBy, e.coaxNote].filter(Boolean).join('; ')}</Txt>
+            <Txt key={e.needKey} variant="caption">• {stationName(e.stationId)} {e.band}: {withLabels([...e.limitedBy, e.coaxNote].filter(Boolean).join('; '), labels)}</Txt>
           ))}
         </View>
       ) : null}

@@ -11,6 +11,7 @@ import { CautionsBox } from './cautions-box';
 import { ClearanceList } from './clearance-list';
 import { PatternPictures } from './pattern-pictures';
 import { ClearanceBadge } from './spot-state-badge';
+import { labelsOf, withLabels } from './label-ids';
 
 type Props = {
   records: SiteRecords;
@@ -25,16 +26,17 @@ type Props = {
 };
 
 /** Everything about one candidate spot: where, how it radiates, what its feed does, and what was checked. */
-export function CandidateDetail({ file, candidate: c, purpose, supportLabel, onAssign, assignLabel, compact, testID }: Props) {
+export function CandidateDetail({ records, file, candidate: c, purpose, supportLabel, onAssign, assignLabel, compact, testID }: Props) {
   const { formatLengthM } = useUnits();
   const input = useMemo(() => evaluateSpot(file, { stationId: c.stationId, band: c.band, shape: c.shape, supportIds: c.supportIds, geometryId: c.id })?.patternInput ?? null, [file, c]);
+  const labels = useMemo(() => labelsOf(records.supports, records.hazards, records.operatingPositions, records.stations, records.coax), [records]);
   const where = c.shape === 'flat' ? `Flat-top between ${c.supportIds.map(supportLabel).join(' and ')}` : `Inverted-V from ${supportLabel(c.supportIds[0])}`;
   return (
     <Card testID={testID} title={`${c.band} · ${where}`} right={<ClearanceBadge level={c.level} testID={`${testID}-level`} />}>
       <Txt variant="bodyStrong">{c.summary}</Txt>
       <Tabular>Score {c.score.toFixed(2)} · wire {formatLengthM(c.wireLengthM)} · feed {formatLengthM(c.feedHeightM)} high ({c.heightWavelengths.toFixed(2)} λ)</Tabular>
       <Tabular>Broadside {c.broadsideDeg.map((d) => `${d.toFixed(0)}°`).join(' and ')} · wire runs {c.wireAzimuthDeg.toFixed(0)}°{c.apexDeg ? ` · apex ${c.apexDeg}°` : ''}</Tabular>
-      {c.explanation.map((l) => <Txt key={l} variant="caption">• {l}</Txt>)}
+      {c.explanation.map((l) => <Txt key={l} variant="caption">• {withLabels(l, labels)}</Txt>)}
       {c.coax ? (
         <Tabular>Coax run {formatLengthM(c.coax.runM)} to the operating position{c.coax.best ? ` · ${c.coax.best.type} ${formatLengthM(c.coax.best.lengthM)}${c.coax.best.totalDb !== null ? `, ${c.coax.best.totalDb.toFixed(1)} dB` : ''}` : ' · no piece in the inventory reaches'}</Tabular>
       ) : null}
@@ -48,7 +50,7 @@ export function CandidateDetail({ file, candidate: c, purpose, supportLabel, onA
       {!compact && input ? <PatternPictures input={input} band={c.band} wireAzimuthDeg={c.wireAzimuthDeg} purpose={purpose} testID={`${testID}-pattern`} /> : null}
       {compact && input ? <Tabular>Takeoff {Math.round(c.pattern.takeoffDeg)}° · peak {c.pattern.peakGainDbi.toFixed(1)} dBi · SWR {c.pattern.swr50.toFixed(2)}</Tabular> : null}
       <Txt variant="label" style={styles.head}>Clearances</Txt>
-      <ClearanceList clearances={c.clearances} testID={`${testID}-clearances`} />
+      <ClearanceList clearances={c.clearances} labels={labels} testID={`${testID}-clearances`} />
       <CautionsBox testID={`${testID}-cautions`} />
     </Card>
   );

@@ -18,6 +18,7 @@ import { CandidatesCard } from './candidates-card';
 import { CautionsBox } from './cautions-box';
 import { SpotPlan } from './spot-plan';
 import { StationsCard } from './stations-card';
+import { labelsOf } from './label-ids';
 
 /** The lead's plan for one event: stations and coax, ranked candidates, assignments and their review state. */
 export function PlanScreen({ eventId }: { eventId: string }) {
@@ -87,6 +88,7 @@ export function PlanScreen({ eventId }: { eventId: string }) {
             plan={plan}
             canPlan={canPlan}
             assignMessage={message}
+            labels={labelsOf(records.supports, records.hazards, records.operatingPositions, records.stations, records.coax)}
             onAssignAll={() => plan.status === 'done' && run(assign.assignAll(plan.result).then((n) => setMessage(`${n} antenna${n === 1 ? '' : 's'} assigned by the engine. Send each for review when ready.`)))}
             onSendForReview={(spot, fp) => run(assign.sendForReview(spot, fp), 'Sent to the safety officer for review.')}
             onOpen={openSpot}

@@ -4,6 +4,7 @@ import { Button, ErrorText, TextField, Txt } from '@/components/ui';
 import { colors, spacing } from '@/constants/theme';
 import type { ResultReview } from '@/shared/review';
 import { ClearanceBadge } from '@/components/plan/spot-state-badge';
+import { withLabels } from '@/components/plan/label-ids';
 
 export const CONFIRM_CLEAR_REASON = 'Clear of what Loftline checked; confirmed against the site notes.';
 
@@ -11,12 +12,13 @@ type Props = {
   result: ResultReview;
   canDecide: boolean;
   decidedByName: (id: string) => string;
+  labels: ReadonlyMap<string, string>;
   onDecide: (resultKey: string, decision: 'accept' | 'send-back', reason: string) => string | null;
   testID: string;
 };
 
 /** One clearance result under review: what was found, the rule and source, the decision in force and the controls. */
-export function DecisionRow({ result: r, canDecide, decidedByName, onDecide, testID }: Props) {
+export function DecisionRow({ result: r, canDecide, decidedByName, labels, onDecide, testID }: Props) {
   const [reason, setReason] = useState(r.needs === 'confirm' ? CONFIRM_CLEAR_REASON : '');
   const [problem, setProblem] = useState<string | null>(null);
   const decide = (d: 'accept' | 'send-back') => {
@@ -27,7 +29,7 @@ export function DecisionRow({ result: r, canDecide, decidedByName, onDecide, tes
   return (
     <View style={styles.row} testID={testID}>
       <ClearanceBadge level={r.level} />
-      <Txt>{r.message}</Txt>
+      <Txt>{withLabels(r.message, labels)}</Txt>
       {r.rule ? <Txt variant="caption" color={colors.inkMuted}>Rule: {r.rule}</Txt> : null}
       {r.source ? <Txt variant="caption" color={colors.inkMuted}>Source: {r.source}</Txt> : null}
       {r.decision ? (

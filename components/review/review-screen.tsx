@@ -5,6 +5,7 @@ import { CautionsBox } from '@/components/plan/cautions-box';
 import { SpotStateBadge } from '@/components/plan/spot-state-badge';
 import { colors, spacing } from '@/constants/theme';
 import { RoleNotice } from '@/components/plan/role-notice';
+import { labelsOf } from '@/components/plan/label-ids';
 import { useMembers } from '@/hooks/api/use-members';
 import { useSession } from '@/hooks/auth/use-session';
 import { useEventRecords } from '@/hooks/plan/use-event-records';
@@ -32,6 +33,7 @@ export function ReviewScreen({ eventId }: { eventId: string }) {
   const canDecide = !!role && can(role, 'review.decide') && !!user;
   const stationName = (id: string) => records.stations.find((s) => s.id === id)?.name ?? 'A removed station';
   const nameOf = (id: string) => members.data?.find((m) => m.userId === id)?.displayName ?? (id === user?.id ? 'you' : 'a safety officer');
+  const labels = labelsOf(records.supports, records.hazards, records.operatingPositions, records.stations, records.coax);
   const queue = [...reviews.spots].sort((a, b) => QUEUE_ORDER[a.review.state] - QUEUE_ORDER[b.review.state]);
   const waiting = queue.filter((s) => s.review.state === 'waiting-review').length;
 
@@ -70,7 +72,7 @@ export function ReviewScreen({ eventId }: { eventId: string }) {
             ) : null}
             {s.review.state !== 'planned'
               ? s.review.results.map((r) => (
-                  <DecisionRow key={r.key} result={r} canDecide={canDecide} decidedByName={nameOf} onDecide={(k, d, reason) => decide(s, k, d, reason)} testID={`review-result-${s.spot.id}-${r.key}`} />
+                  <DecisionRow key={r.key} result={r} canDecide={canDecide} decidedByName={nameOf} labels={labels} onDecide={(k, d, reason) => decide(s, k, d, reason)} testID={`review-result-${s.spot.id}-${r.key}`} />
                 ))
               : null}
           </Card>
