@@ -25,7 +25,7 @@ export function InviteScreen({ token }: { token: string }) {
   if (preview.isError || !preview.data) {
     return (
       <AuthFrame title="This invitation cannot be used" intro={errorMessage(preview.error)} testID="invite">
-        <Txt color={colors.inkMuted}>It may have expired, been revoked or already been accepted. Ask the club's admin to send a new one.</Txt>
+        <Txt color={colors.inkMuted}>An invitation works once and only until its date. If you still need to join, ask the club's admin to send a new one.</Txt>
         <AuthLink href="/" label="Go to Loftline" testID="invite-home" />
       </AuthFrame>
     );
