@@ -21,10 +21,16 @@ type Props = {
 export function DecisionRow({ result: r, canDecide, decidedByName, labels, onDecide, testID }: Props) {
   const [reason, setReason] = useState(r.needs === 'confirm' ? CONFIRM_CLEAR_REASON : '');
   const [problem, setProblem] = useState<string | null>(null);
+  // Once a result is accepted only "send back" is left, and its reason box opens on demand.
+  const [reopened, setReopened] = useState(false);
+  const decided = r.needs === 'nothing' && !reopened;
   const decide = (d: 'accept' | 'send-back') => {
     const p = onDecide(r.key, d, reason);
     setProblem(p);
-    if (!p) setReason(r.needs === 'confirm' ? CONFIRM_CLEAR_REASON : '');
+    if (!p) {
+      setReason(r.needs === 'confirm' ? CONFIRM_CLEAR_REASON : '');
+      setReopened(false);
+    }
   };
   return (
     <View style={styles.row} testID={testID}>
@@ -42,7 +48,9 @@ export function DecisionRow({ result: r, canDecide, decidedByName, labels, onDec
       ) : null}
       {canDecide ? (
         <View style={styles.controls}>
-          {r.needs !== 'nothing' || r.decision?.decision !== 'send-back' ? (
+          {decided ? (
+            <Button label="Send back to the lead…" icon="return" variant="quiet" compact testID={`${testID}-reopen`} onPress={() => setReopened(true)} />
+          ) : (
             <TextField
               label={r.needs === 'accept-with-reason' ? 'Why this is acceptable, or why it goes back' : 'Reason'}
               testID={`${testID}-reason`}
@@ -50,13 +58,13 @@ export function DecisionRow({ result: r, canDecide, decidedByName, labels, onDec
               onChangeText={setReason}
               multiline
             />
-          ) : null}
-          <View style={styles.buttons}>
+          )}
+          {decided ? null : <View style={styles.buttons}>
             {r.needs === 'accept-with-reason' || r.needs === 'confirm' ? (
               <Button label={r.needs === 'confirm' ? 'Confirm' : 'Accept'} icon="check-circle" testID={`${testID}-accept`} onPress={() => decide('accept')} />
             ) : null}
             <Button label="Send back to the lead" icon="return" variant="danger" testID={`${testID}-send-back`} onPress={() => decide('send-back')} />
-          </View>
+          </View>}
           {problem ? <ErrorText message={problem} testID={`${testID}-problem`} /> : null}
         </View>
       ) : null}
