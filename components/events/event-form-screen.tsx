@@ -67,7 +67,7 @@ function EventForm({ clubId, sites, existing, title }: { clubId: string; sites: 
   return (
     <Screen title={title} subtitle="A field day or outing at one of the club's sites." narrow testID="event-form">
       <Card>
-        <FormTextField control={control} name="name" label="Name" testID="event-name" placeholder="Winter field day" serverError={server.name} />
+        <FormTextField control={control} name="name" label="Name" testID="event-name" placeholder="e.g. Spring outing at the meadow" serverError={server.name} />
         <View style={styles.days}>
           <View style={styles.day}>
             <FormTextField control={control} name="startsOn" label="First day" testID="event-starts" placeholder="2026-12-12" mono hint="As YYYY-MM-DD" serverError={server.startsOn} />

@@ -43,10 +43,12 @@ export function SyncIndicator() {
         }}
         style={[styles.pill, { backgroundColor: look.bg, borderColor: look.fg }]}
       >
-        <Icon name={text.warnings.length && text.tone === 'ok' ? 'triangle-alert' : look.icon} size={18} color={look.fg} />
+        <Icon name={look.icon} size={18} color={look.fg} />
         <Txt variant="caption" color={look.fg} style={styles.headline} testID="sync-indicator-headline">
           {text.headline}
         </Txt>
+        {/* A warning (e.g. storage the browser may evict) sits beside the state, so "synced" never wears a warning sign. */}
+        {text.warnings.length ? <Icon name="triangle-alert" size={16} color={colors.warning} /> : null}
       </Pressable>
       {open ? (
         <View style={styles.details} testID="sync-indicator-details" accessibilityLiveRegion="polite">
