@@ -14,17 +14,19 @@ type Props = { input: DipoleInput; band: BandName; wireAzimuthDeg: number; purpo
 
 /** The predicted elevation and azimuth patterns and the feed across the band, as pictures with numbers beside. */
 export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }: Props) {
+  const win = OPERATOR_WINDOWS.find((w) => w.id === purpose)!;
+  // The azimuth cut is taken in the middle of the station's angle window: where its contacts are.
+  const azElevationDeg = Math.round((win.fromDeg + win.toDeg) / 2);
   const data = useMemo(() => {
     const elev = elevationCut(input, 1);
     const peak = elev.reduce((a, p) => (p.gainDbi > a.gainDbi ? p : a), elev[0]);
-    const az = azimuthCut(input, Math.max(1, peak.deg), 2);
+    const az = azimuthCut(input, azElevationDeg, 2);
     const azPeak = Math.max(...az.map((p) => p.gainDbi));
     const { lowMhz, highMhz } = BANDS[band];
     const sweep = feedSweep(input, lowMhz, highMhz, 31);
     const res = resonanceInfo(input, lowMhz, highMhz);
     return { elev, peak, az, azPeak, sweep, res, lowMhz, highMhz };
-  }, [input, band]);
-  const win = OPERATOR_WINDOWS.find((w) => w.id === purpose)!;
+  }, [input, band, azElevationDeg]);
   const cx = SIZE / 2;
   const cy = SIZE / 2 + 40;
   const box = { x: 44, y: 16, width: SIZE - 60, height: 150 };
@@ -43,13 +45,13 @@ export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }
           <Path d={elevationPath(data.elev, data.peak.gainDbi, cx, cy, R)} fill="rgba(224,87,15,0.18)" stroke={colors.brand} strokeWidth={2.5} />
           <TakeoffMark deg={data.peak.deg} cx={cx} cy={cy} />
           <SvgText x={cx + R + 2} y={cy + 16} fontSize={12} fontFamily={fonts.mono} fill={colors.inkMuted} textAnchor="end">0°</SvgText>
-          <SvgText x={cx} y={cy - R - 6} fontSize={12} fontFamily={fonts.mono} fill={colors.inkMuted} textAnchor="middle">90°</SvgText>
+          {data.peak.deg < 80 ? <SvgText x={cx} y={cy - R - 6} fontSize={12} fontFamily={fonts.mono} fill={colors.inkMuted} textAnchor="middle">90°</SvgText> : null}
         </Svg>
         <Tabular>Peak {data.peak.gainDbi.toFixed(1)} dBi at {data.peak.deg}° · rings 10 dB apart</Tabular>
         <Txt variant="caption" color={colors.info}>Shaded: {win.label}, {win.fromDeg}–{win.toDeg}°</Txt>
       </View>
       <View style={styles.picture}>
-        <Txt variant="label">Azimuth at {Math.max(1, data.peak.deg)}° elevation (north up)</Txt>
+        <Txt variant="label">Azimuth at {azElevationDeg}° elevation (north up)</Txt>
         <Svg width={SIZE} height={SIZE} accessibilityLabel={`Azimuth pattern, north up; the wire runs ${wireAzimuthDeg.toFixed(0)}° and ${(wireAzimuthDeg + 180).toFixed(0)}°; the most signal goes broadside.`} testID={`${testID}-azimuth`}>
           {[1, 2 / 3, 1 / 3].map((f) => <Circle key={f} cx={cx} cy={SIZE / 2} r={R * f} fill="none" stroke={colors.lineSoft} strokeWidth={1} />)}
           <WireMark az={wireAzimuthDeg} cx={cx} cy={SIZE / 2} />

@@ -96,6 +96,8 @@ describe('plan, review and the day on the demo scenario', { timeout: 600_000 }, 
     await byTestId(page, 'plan-candidate-0-pattern-swr').waitFor();
     await byTestId(page, 'plan-candidate-0-cautions').waitFor();
     await screenshot(page, 'plan-assigned', 'wide');
+    await byTestId(page, 'plan-candidate-0-pattern-elevation').scrollIntoViewIfNeeded();
+    await screenshot(page, 'plan-pattern', 'wide');
     expect(lead.errors).toEqual([]);
   });
 
