@@ -57,6 +57,9 @@ export function publicAreaClearances(fp: AntennaFootprint, hazards: readonly Rec
     const what = pub ? `${h.kind} ${h.id}` : `building ${h.id}`;
     const guyText =
       worst.s.kind === 'mast' ? `; guy anchors at least ${fmtM(worst.s.heightM * GUY_RADIUS_FRACTION)} out` : '';
+    // Only a mast is assumed to fall over; around a tree or structure the zone is where the wire, insulators
+    // and ropes can come down, and the message says so rather than calling it the support's fall zone.
+    const zone = worst.s.kind === 'mast' ? 'fall zone' : 'zone where the wire and ropes can come down';
     out.push({
       key: `${pub ? 'public-area' : 'property'}:${h.id}`,
       kind: pub ? 'public-area' : 'property',
@@ -68,9 +71,9 @@ export function publicAreaClearances(fp: AntennaFootprint, hazards: readonly Rec
         : 'a fall zone over a building needs the owner’s agreement',
       source: PUBLIC_AREA_SOURCE,
       message: inside
-        ? `${what} is ${fmtM(worst.distanceM)} from ${worst.s.kind} ${worst.s.supportId}, inside its fall zone: ` +
+        ? `${what} is ${fmtM(worst.distanceM)} from ${worst.s.kind} ${worst.s.supportId}, inside its ${zone}: ` +
           `rope off ${fmtM(worst.radiusM)} around it${guyText}.`
-        : `${what} is ${fmtM(worst.distanceM)} from ${worst.s.kind} ${worst.s.supportId}, outside its ${fmtM(worst.radiusM)} fall zone${guyText}.`,
+        : `${what} is ${fmtM(worst.distanceM)} from ${worst.s.kind} ${worst.s.supportId}, outside its ${fmtM(worst.radiusM)} ${zone}${guyText}.`,
       caution: SAFETY_CAUTION,
     });
   }
