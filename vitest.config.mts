@@ -9,6 +9,9 @@ const legacyDecorators = { decorator: { legacy: true, emitDecoratorMetadata: tru
 export default defineConfig({
   oxc: legacyDecorators,
   test: {
+    // Three workers on two cores: most server and e2e time is spent waiting on PostgreSQL and Chromium,
+    // so a third file in flight shortens the run without starving the CPU-bound fuzz files.
+    maxWorkers: 3,
     projects: [
       {
         oxc: legacyDecorators,

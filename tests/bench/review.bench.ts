@@ -14,7 +14,7 @@ const meta = (id: string) => ({ id, clubId: CLUB, createdAt: T, updatedAt: T, de
 function recordsOf(n: number) {
   const file = generateDemoSite({ supports: n, random: seededRandom(7) });
   const plan = planSite(file);
-  const site: Site = { ...meta('00000000-0000-4000-8000-000000000001'), name: file.name, refLat: file.reference.lat, refLon: file.reference.lon, notes: '', groundDescription: '', groundClass: typeof file.ground === 'string' ? file.ground : 'average', groundSigmaSPerM: null, groundEpsR: null, accessNotes: '', rules: '' };
+  const site: Site = { ...meta('00000000-0000-4000-8000-000000000001'), name: file.name ?? 'Generated park', refLat: file.reference.lat, refLon: file.reference.lon, notes: '', groundDescription: '', groundClass: typeof file.ground === 'string' ? file.ground : 'average', groundSigmaSPerM: null, groundEpsR: null, accessNotes: '', rules: '' };
   const supports: Support[] = file.supports.map((s) => ({ ...meta(s.id), siteId: site.id, kind: s.kind, label: s.id, lat: s.lat, lon: s.lon, positionAccuracyM: 3, heightM: s.heightM, attachHeightM: s.attachHeightM ?? null, launchMethod: null, maxEnds: s.maxEnds ?? 2, species: '', condition: '', mastModel: '', notes: '' }));
   const hazards: Hazard[] = file.hazards.map((h) => ({ ...meta(h.id), siteId: site.id, kind: h.kind, label: h.id, points: h.points, isArea: false, heightM: h.heightM ?? null, voltageClass: h.kind === 'power-line' ? 'distribution' : null, voltageKv: h.voltageKv ?? null, notes: '' }));
   const stations: Station[] = file.stations.map((s) => ({ ...meta(s.id), eventId: site.id, name: s.id, bands: s.bands, mode: s.mode, powerW: s.powerW, purpose: s.purpose ?? 'regional', notes: '' }));
