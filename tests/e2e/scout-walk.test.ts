@@ -91,6 +91,10 @@ describe('scout walk: recording a site on a phone with no network (390×844, emu
 
     // ---- a tree where the scout stands, the fix averaged over several readings, the height measured ----
     const oakAt = at(-45, -8);
+    // The scout walks to the tree first and only then opens the form, as on the day: otherwise the reading
+    // still held from the reference point (45 m away) may or may not reach the new session, depending on timing.
+    await standAt(oakAt, 9, 1);
+    await page.waitForTimeout(600);
     await tid('add-tree').click();
     await tid('support-label').fill('Walk oak');
     await standAt(oakAt, 9, 4);
