@@ -8,53 +8,12 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 // Brings in the type of window.__loftlineE2E, the test-build hook the page exposes.
 import type {} from '../../components/offline/e2e-api';
-import { PROTOCOL_VERSION, SCHEMA_VERSION } from '../../sync/protocol';
+import { api, pullAll, until } from './helpers/api';
 import { launchBrowser, newPage, screenshot } from './helpers/browser';
 import { DEMO_PASSWORD, DEMO_SITE, DEMO_USERS } from './helpers/demo-users';
 import { baseUrl, signIn } from './helpers/session';
 
 const sha = (b: Buffer) => createHash('sha256').update(b).digest('hex');
-
-async function api<T>(path: string, init: { method?: string; token?: string; json?: unknown } = {}): Promise<{ status: number; body: T; raw: Response }> {
-  const res = await fetch(`${baseUrl()}${path}`, {
-    method: init.method ?? (init.json === undefined ? 'GET' : 'POST'),
-    headers: { ...(init.json === undefined ? {} : { 'content-type': 'application/json' }), ...(init.token ? { authorization: `Bearer ${init.token}` } : {}) },
-    body: init.json === undefined ? undefined : JSON.stringify(init.json),
-  });
-  const text = res.headers.get('content-type')?.includes('json') ? await res.text() : '';
-  return { status: res.status, body: (text ? JSON.parse(text) : undefined) as T, raw: res };
-}
-
-/** Every record the server holds for the club, through the sync pull route (what any phone would receive). */
-async function pullAll(token: string, clubId: string): Promise<{ collection: string; id: string; fields: Record<string, unknown>; deletedAt: string | null }[]> {
-  const out: { collection: string; id: string; fields: Record<string, unknown>; deletedAt: string | null }[] = [];
-  let cursor = '0';
-  for (;;) {
-    const r = await api<{ type: string; changes: typeof out; cursor: string; hasMore: boolean }>(`/api/clubs/${clubId}/sync/pull`, {
-      token,
-      json: { type: 'pull', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, cursor, limit: 1000 },
-    });
-    if (r.status !== 200 || r.body.type !== 'changes') throw new Error(`pull failed: ${r.status} ${JSON.stringify(r.body)}`);
-    out.push(...r.body.changes);
-    cursor = r.body.cursor;
-    if (!r.body.hasMore) return out;
-  }
-}
-
-async function until<T>(what: string, fn: () => Promise<T | null | undefined | false>, timeoutMs = 90_000): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  let last: unknown;
-  while (Date.now() < end) {
-    try {
-      const v = await fn();
-      if (v) return v;
-    } catch (err) {
-      last = err;
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error(`timed out waiting for ${what}${last ? `: ${String(last)}` : ''}`);
-}
 
 describe('offline: a scout works with no network, the app reopens from the service worker, everything syncs', () => {
   let browser: Browser;
