@@ -108,3 +108,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, secret: (dataDi
     jsonLimit: '2mb',
   };
 }
+
+/** loadConfig for the entry points: a bad setting is printed as one line and gives null (they exit with 2). */
+export function loadConfigOrReport(): Config | null {
+  try {
+    return loadConfig();
+  } catch (err) {
+    if (!(err instanceof ConfigError)) throw err;
+    console.error(`loftline: ${err.message}`);
+    return null;
+  }
+}

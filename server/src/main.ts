@@ -3,20 +3,12 @@
 // the demo scenario only when SEED_DEMO=1.
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { ConfigError, loadConfig } from './config';
+import { loadConfigOrReport } from './config';
 import { startStack, stopOnSignal } from './dev/stack';
 
 async function main(): Promise<number> {
-  let config;
-  try {
-    config = loadConfig();
-  } catch (err) {
-    if (err instanceof ConfigError) {
-      console.error(`loftline: ${err.message}`);
-      return 2;
-    }
-    throw err;
-  }
+  const config = loadConfigOrReport();
+  if (!config) return 2;
   const webDir = resolve(process.env.WEB_DIR ?? join(__dirname, '../../dist'));
   if (!existsSync(join(webDir, 'index.html'))) console.warn(`loftline: no web build in ${webDir} (npm run build:web); serving the API only`);
   const stack = await startStack({

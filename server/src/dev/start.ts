@@ -2,7 +2,7 @@
 // (private PostgreSQL in ${DATA_DIR}/pg, demo data on first start), prints where to go, stops cleanly on Ctrl-C.
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
-import { ConfigError, loadConfig } from '../config';
+import { loadConfigOrReport } from '../config';
 import { DEMO_PASSWORD, DEMO_USERS } from './demo-scenario';
 import { startStack, stopOnSignal } from './stack';
 
@@ -47,16 +47,8 @@ async function buildWebIfNeeded(): Promise<void> {
 
 async function main(): Promise<number> {
   const t0 = Date.now();
-  let config;
-  try {
-    config = loadConfig();
-  } catch (err) {
-    if (err instanceof ConfigError) {
-      console.error(`loftline: ${err.message}`);
-      return 2;
-    }
-    throw err;
-  }
+  const config = loadConfigOrReport();
+  if (!config) return 2;
   await buildWebIfNeeded();
   const stack = await startStack({
     dataDir: config.dataDir,
