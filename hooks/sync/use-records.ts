@@ -1,6 +1,6 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import type { CollectionName, StoredRecord } from '@/shared/schemas';
-import type { RecordFilter } from '@/sync';
+import type { RecordFilter, SyncClient } from '@/sync';
 import { useSyncContext } from './sync-provider';
 
 /*
@@ -8,22 +8,29 @@ import { useSyncContext } from './sync-provider';
  * in another tab. undefined while the store is opening (show a loading state, not "nothing here").
  */
 
-export function useRecords<C extends CollectionName>(collection: C, filter?: RecordFilter, opts: { includeDeleted?: boolean } = {}): StoredRecord<C>[] | undefined {
+/**
+ * Runs `read` now and again whenever `collection` changes; only the latest answer is kept, so a slow early read
+ * never overwrites a newer one. `key` names the read's inputs (it re-runs when they change); with no client or no
+ * read the value is `idle`.
+ */
+function useLiveRead<T>(collection: CollectionName, key: string, read: ((client: SyncClient) => Promise<T>) | null, idle: T | undefined): T | undefined {
   const { client } = useSyncContext();
-  const [rows, setRows] = useState<StoredRecord<C>[] | undefined>(undefined);
-  const filterKey = JSON.stringify(filter ?? {});
-  const includeDeleted = opts.includeDeleted ?? false;
+  const [value, setValue] = useState<T | undefined>(undefined);
+  const readRef = useRef(read);
+  readRef.current = read;
+  const hasRead = read !== null;
   useEffect(() => {
-    if (!client) {
-      setRows(undefined);
+    const run = readRef.current;
+    if (!client || !run) {
+      setValue(idle);
       return;
     }
     let live = true;
     let seq = 0;
     const load = () => {
       const n = ++seq;
-      client.list(collection, JSON.parse(filterKey) as RecordFilter, { includeDeleted }).then(
-        (r) => live && n === seq && setRows(r),
+      run(client).then(
+        (v) => live && n === seq && setValue(v),
         () => undefined,
       );
     };
@@ -35,37 +42,29 @@ export function useRecords<C extends CollectionName>(collection: C, filter?: Rec
       live = false;
       unsubscribe();
     };
-  }, [client, collection, filterKey, includeDeleted]);
-  return rows;
+    // `idle` follows from `key` and `hasRead`; `read` is taken fresh from the ref.
+  }, [client, collection, key, hasRead]);
+  return value;
+}
+
+export function useRecords<C extends CollectionName>(collection: C, filter?: RecordFilter, opts: { includeDeleted?: boolean } = {}): StoredRecord<C>[] | undefined {
+  const filterKey = JSON.stringify(filter ?? {});
+  const includeDeleted = opts.includeDeleted ?? false;
+  return useLiveRead(
+    collection,
+    `${filterKey}|${includeDeleted}`,
+    (client) => client.list(collection, JSON.parse(filterKey) as RecordFilter, { includeDeleted }),
+    undefined,
+  );
 }
 
 /** One record; null when it does not exist (or is deleted), undefined while loading. */
 export function useRecord<C extends CollectionName>(collection: C, id: string | null | undefined, opts: { includeDeleted?: boolean } = {}): StoredRecord<C> | null | undefined {
-  const { client } = useSyncContext();
-  const [row, setRow] = useState<StoredRecord<C> | null | undefined>(undefined);
   const includeDeleted = opts.includeDeleted ?? false;
-  useEffect(() => {
-    if (!client || !id) {
-      setRow(id ? undefined : null);
-      return;
-    }
-    let live = true;
-    let seq = 0;
-    const load = () => {
-      const n = ++seq;
-      client.get(collection, id, { includeDeleted }).then(
-        (r) => live && n === seq && setRow(r),
-        () => undefined,
-      );
-    };
-    load();
-    const unsubscribe = client.subscribe((changed) => {
-      if (changed.size === 0 || changed.has(collection)) load();
-    });
-    return () => {
-      live = false;
-      unsubscribe();
-    };
-  }, [client, collection, id, includeDeleted]);
-  return row;
+  return useLiveRead(
+    collection,
+    `${id ?? ''}|${includeDeleted}`,
+    id ? (client) => client.get(collection, id, { includeDeleted }) : null,
+    id ? undefined : null,
+  );
 }
