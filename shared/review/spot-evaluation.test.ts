@@ -13,9 +13,9 @@ const tree = (n: number, e: number, north: number, over: Partial<Support> = {}):
   ...meta(n), siteId: site.id, kind: 'tree', label: `Tree ${n}`, ...at(e, north), positionAccuracyM: 3, heightM: 18, attachHeightM: 14, launchMethod: 'throw-bag', maxEnds: 2, species: '', condition: '', mastModel: '', notes: '', ...over,
 });
 const line: Hazard = { ...meta(50), siteId: site.id, kind: 'power-line', label: 'Road line', points: [at(6, -80), at(6, 80)], isArea: false, heightM: 9, voltageClass: 'distribution', voltageKv: 12.47, notes: '' };
-const station: Station = { ...meta(60), eventId: uuid(61), name: 'CW', bands: ['20m', '15m'], mode: 'cw', powerW: 100, purpose: 'long-distance', notes: '' };
+const station: Station = { ...meta(60), eventId: uuid(61), name: 'CW', bands: ['20m', '15m'], mode: 'cw', powerW: 100, purpose: 'long-distance', crewMemberIds: [], notes: '' };
 const spot = (n: number, supportId: string, band: '20m' | '15m' = '20m', state: AntennaSpot['state'] = 'waiting-review'): AntennaSpot => ({
-  ...meta(n), eventId: uuid(61), stationId: station.id, band, shape: 'inverted-v', supportIds: [supportId], coaxId: null, operatingPositionId: null, state, stateReason: '', inputsFingerprint: '', measuredSwr: null, notes: '',
+  ...meta(n), eventId: uuid(61), stationId: station.id, band, shape: 'inverted-v', supportIds: [supportId], legAzimuthDeg: null, coaxId: null, operatingPositionId: null, state, stateReason: '', inputsFingerprint: '', measuredSwr: null, notes: '',
 });
 const records = (supports: Support[]) => ({ site, supports, hazards: [line], operatingPositions: [], stations: [station], coax: [] });
 const accept = (n: number, spotId: string, key: string, fp: string): ReviewDecision => ({ ...meta(n), spotId, resultKey: key, decision: 'accept', reason: 'Checked on site', inputsFingerprint: fp, decidedAt: T, decidedBy: uuid(98) });

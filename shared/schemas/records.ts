@@ -145,6 +145,8 @@ export const stationFieldsSchema = z.strictObject({
   mode: z.enum(MODES),
   powerW: z.number().positive('power must be above 0').max(1500, 'US amateur limit is 1500 W PEP (47 CFR 97.313)'),
   purpose: z.enum(PURPOSES),
+  /** Club members (user ids) who put this station's antennas up on the day; they get its crew sheets first. */
+  crewMemberIds: z.array(idSchema).max(30, 'at most 30 crew members per station').default([]),
   notes,
 });
 
@@ -166,6 +168,11 @@ export const antennaSpotFieldsSchema = z.strictObject({
   shape: z.enum(['flat', 'inverted-v']),
   /** One support for an inverted-V, two for a flat-top. */
   supportIds: z.array(idSchema).min(1).max(2),
+  /**
+   * For an inverted-V: the compass bearing of the line through both leg ends, degrees from true north in
+   * [0, 180) (a wire laid 30°–210° is 30). Null for a flat-top, or to let the engine pick its best direction.
+   */
+  legAzimuthDeg: optionalNumber(z.number().min(0, 'leg bearing is 0 to 179.9°').lt(180, 'leg bearing is 0 to 179.9° (a wire along 200° is along 20°)')),
   coaxId: idSchema.nullable().default(null),
   operatingPositionId: idSchema.nullable().default(null),
   state: spotStateSchema.default('planned'),
@@ -174,6 +181,9 @@ export const antennaSpotFieldsSchema = z.strictObject({
   inputsFingerprint: z.string().max(128).default(''),
   measuredSwr: optionalNumber(z.number().min(1, 'SWR is at least 1').max(100)),
   notes,
+}).refine((s) => s.legAzimuthDeg === null || s.shape === 'inverted-v', {
+  message: 'only an inverted-V has a leg bearing',
+  path: ['legAzimuthDeg'],
 });
 
 export const reviewDecisionFieldsSchema = z.strictObject({

@@ -3,9 +3,13 @@ export const PROTOCOL_VERSION = 1;
 /** Oldest protocol version the server still answers. */
 export const MIN_PROTOCOL_VERSION = 1;
 /** Version of the record schemas in shared/schemas that the messages carry. */
-export const SCHEMA_VERSION = 1;
-/** Oldest record schema version the server still accepts. */
-export const MIN_SCHEMA_VERSION = 1;
+export const SCHEMA_VERSION = 2;
+/**
+ * Oldest record schema version the server still accepts. Version 2 added antennaSpots.legAzimuthDeg and
+ * stations.crewMemberIds; a version-1 app would refuse those records on pull (its schemas are strict), so it is
+ * told to reload (its unsynced changes stay in its outbox and go up from the reloaded app).
+ */
+export const MIN_SCHEMA_VERSION = 2;
 
 export type VersionVerdict = { type: 'ok' } | { type: 'client-too-old'; message: string } | { type: 'server-too-old'; message: string };
 

@@ -3,6 +3,7 @@
 import 'fake-indexeddb/auto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { purgeTombstones } from '../../server/src/modules/sync/tombstones';
+import { PROTOCOL_VERSION, SCHEMA_VERSION } from '../../sync/protocol';
 import { SimDevice } from '../sync/harness/sync-device';
 import { supportFields } from '../sync/harness/fixtures';
 import { startTestApp, type TestApp, type TestUser } from './helpers/test-app';
@@ -77,7 +78,7 @@ describe('sync pull', () => {
     await a.sync();
     await b.client.update('supports', kept, { notes: 'written while away' });
     await purgeTombstones(app.deps.dataSource, new Date(Date.now() + 60_000));
-    const res = await app.api('POST', `/api/clubs/${clubId}/sync/pull`, { auth: lead, body: { type: 'pull', protocolVersion: 1, schemaVersion: 1, cursor: '1', limit: 10 } });
+    const res = await app.api('POST', `/api/clubs/${clubId}/sync/pull`, { auth: lead, body: { type: 'pull', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, cursor: '1', limit: 10 } });
     expect(res.body.type).toBe('resync-required');
     await b.sync();
     expect(b.client.status().error).toBeNull();

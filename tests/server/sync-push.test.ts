@@ -166,11 +166,11 @@ describe('sync push', () => {
     expect(newer.body).toMatchObject({ type: 'server-too-old' });
     const older = await push(scout, 'v-test', [], { protocolVersion: 0, schemaVersion: SCHEMA_VERSION });
     expect(older.body).toMatchObject({ type: 'client-too-old' });
-    const bad = await app.api('POST', `/api/clubs/${clubId}/sync/pull`, { auth: scout, body: { type: 'pull', protocolVersion: 1, schemaVersion: 1, cursor: 'abc', limit: 10 } });
+    const bad = await app.api('POST', `/api/clubs/${clubId}/sync/pull`, { auth: scout, body: { type: 'pull', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, cursor: 'abc', limit: 10 } });
     expect(bad.status).toBe(400);
     expect(bad.body.code).toBe('validation_failed');
     const outsider = await app.signUpUser();
-    const hidden = await app.api('POST', `/api/clubs/${clubId}/sync/pull`, { auth: outsider, body: { type: 'pull', protocolVersion: 1, schemaVersion: 1, cursor: '0', limit: 10 } });
+    const hidden = await app.api('POST', `/api/clubs/${clubId}/sync/pull`, { auth: outsider, body: { type: 'pull', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, cursor: '0', limit: 10 } });
     expect(hidden.status).toBe(404);
   });
 });

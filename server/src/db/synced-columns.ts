@@ -46,10 +46,10 @@ export const SYNCED_FIELD_COLUMNS: { [C in CollectionName]: Record<string, Field
     siteId: uuid, subjectCollection: text, subjectId: uuid, sha256: text, mimeType: text, bytes: int, width: intNull,
     height: intNull, caption: text, takenAt: instant,
   },
-  stations: { eventId: uuid, name: text, bands: json, mode: text, powerW: num, purpose: text, notes: text },
+  stations: { eventId: uuid, name: text, bands: json, mode: text, powerW: num, purpose: text, crewMemberIds: json, notes: text },
   coax: { label: text, type: text, lengthM: num, notes: text },
   antennaSpots: {
-    eventId: uuid, stationId: uuid, band: text, shape: text, supportIds: json, coaxId: uuidNull, operatingPositionId: uuidNull,
+    eventId: uuid, stationId: uuid, band: text, shape: text, supportIds: json, legAzimuthDeg: numNull, coaxId: uuidNull, operatingPositionId: uuidNull,
     state: text, stateReason: text, inputsFingerprint: text, measuredSwr: numNull, notes: text,
   },
   reviewDecisions: {

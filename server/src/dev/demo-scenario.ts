@@ -97,8 +97,8 @@ export const DEMO_POSITIONS: { key: string; at: Offset; fields: Omit<CollectionF
 ];
 
 export const DEMO_STATIONS: { key: string; fields: Omit<CollectionFields<'stations'>, 'eventId'> }[] = [
-  { key: 's1', fields: { name: 'Station 1 (low bands)', bands: ['80m', '40m'], mode: 'ssb', powerW: 100, purpose: 'regional', notes: '' } },
-  { key: 's2', fields: { name: 'Station 2 (high bands)', bands: ['20m', '15m', '10m'], mode: 'cw', powerW: 100, purpose: 'long-distance', notes: '' } },
+  { key: 's1', fields: { name: 'Station 1 (low bands)', bands: ['80m', '40m'], mode: 'ssb', powerW: 100, purpose: 'regional', crewMemberIds: [], notes: '' } },
+  { key: 's2', fields: { name: 'Station 2 (high bands)', bands: ['20m', '15m', '10m'], mode: 'cw', powerW: 100, purpose: 'long-distance', crewMemberIds: [], notes: '' } },
 ];
 
 export const DEMO_COAX: { key: string; fields: CollectionFields<'coax'> }[] = [
