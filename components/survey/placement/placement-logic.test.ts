@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { MAX_OFFSET_M, addReading, addReadingWhereStanding, averaged, fixMeasurementInputs, offsetAccuracyM, placeByOffset, type PlacementGeo } from './placement-logic';
+import { MAX_OFFSET_M, addReading, movedBeyondM, addReadingWhereStanding, averaged, fixMeasurementInputs, offsetAccuracyM, placeByOffset, type PlacementGeo } from './placement-logic';
 
 // A stand-in for shared/geo that records what it was asked: this suite checks the rules around the
 // geodesy (which readings count, which inputs are refused), not the geodesy itself.
@@ -42,6 +42,20 @@ describe('placement rules (fix averaging session, distance and bearing)', () => 
     expect(near).toHaveLength(3);
     const far = addReadingWhereStanding(here, { lat: 1.002, lon: 2, accuracyM: 5, atMs: 4 }, 0, geo);
     expect(far).toEqual([{ lat: 1.002, lon: 2, accuracyM: 5, atMs: 4 }]);
+  });
+
+  it('"clearly elsewhere" adds the two accuracies in quadrature (variances of independent errors add: textbook error propagation)', () => {
+    // 12 m and 9 m → √(144 + 81) = 15 m, three of them 45 m (the old a + b rule said 63 m).
+    expect(movedBeyondM(12, 9)).toBeCloseTo(45, 12);
+    expect(movedBeyondM(3, 4)).toBeCloseTo(15, 12);
+    // A phone still reporting the reference point 50 m back (12 m accuracy) no longer joins a session at a tree
+    // (9 m): it restarts the session there rather than blending the two places.
+    const flat = { ...geo, distanceM: (a: { lat: number }, b: { lat: number }) => Math.abs(a.lat - b.lat) * 111_320 };
+    const atTree = [{ lat: 1, lon: 2, accuracyM: 9, atMs: 1 }, { lat: 1, lon: 2, accuracyM: 9, atMs: 2 }, { lat: 1, lon: 2, accuracyM: 9, atMs: 3 }];
+    const avg = averaged(atTree, flat)!;
+    const stale = { lat: 1 + 50 / 111_320, lon: 2, accuracyM: 12, atMs: 4 };
+    expect(flat.distanceM(avg, stale)).toBeGreaterThan(movedBeyondM(avg.accuracyM, 12));
+    expect(addReadingWhereStanding(atTree, stale, 0, flat)).toEqual([stale]);
   });
 
   it('the fix measurement keeps the count, best and worst readings and how long the scout waited', () => {

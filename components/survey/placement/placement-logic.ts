@@ -36,17 +36,22 @@ export function addReading(readings: readonly Fix[], r: Fix, sessionStartMs = -I
 }
 
 /**
- * A reading this far outside the session's average (in units of the two accuracies added) means the scout
- * has walked on: averaging starts again from the new reading instead of blending two places (common practice).
+ * A reading this far outside the session's average means the scout has walked on: averaging starts again from
+ * the new reading instead of blending two places. The yardstick is the spread of the DIFFERENCE of two
+ * independent position errors, whose variances add (textbook error propagation), so the two accuracies are
+ * combined as √(a² + b²), not a + b; three of those is the usual "clearly not the same place" (common practice).
  */
 export const MOVED_FACTOR = 3;
+
+/** Distance beyond which a reading is taken to come from somewhere else (MOVED_FACTOR × √(a² + b²)). */
+export const movedBeyondM = (sessionAccuracyM: number, readingAccuracyM: number): number => MOVED_FACTOR * Math.hypot(sessionAccuracyM, readingAccuracyM);
 
 /** addReading, but a reading from somewhere clearly else restarts the session there. */
 export function addReadingWhereStanding(readings: readonly Fix[], r: Fix, sessionStartMs: number, geo: PlacementGeo): Fix[] {
   const next = addReading(readings, r, sessionStartMs);
   if (next.length === readings.length || readings.length === 0) return next;
   const avg = averaged(readings, geo);
-  if (avg && r.accuracyM !== null && geo.distanceM(avg, r) > MOVED_FACTOR * (avg.accuracyM + r.accuracyM)) return [r];
+  if (avg && r.accuracyM !== null && geo.distanceM(avg, r) > movedBeyondM(avg.accuracyM, r.accuracyM)) return [r];
   return next;
 }
 
