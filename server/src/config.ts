@@ -28,6 +28,13 @@ export const envSchema = z
     LOG_LEVEL: z.enum(LOG_LEVELS, { message: `LOG_LEVEL must be one of ${LOG_LEVELS.join(', ')}` }).default('info'),
     AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
     AUTH_RATE_LIMIT_PER_IP: z.coerce.number().int().min(1).default(50),
+    /** Days a deleted record's tombstone is kept so every phone hears of the delete (see modules/sync/tombstones.ts). */
+    TOMBSTONE_KEEP_DAYS: z.coerce
+      .number({ message: 'TOMBSTONE_KEEP_DAYS must be a number of days' })
+      .int('TOMBSTONE_KEEP_DAYS must be a whole number of days')
+      .min(7, 'TOMBSTONE_KEEP_DAYS must be at least 7: a phone away for a week must still hear of deletes')
+      .max(3650)
+      .default(90),
   })
   .refine((e) => e.MAIL_TRANSPORT !== 'smtp' || !!e.SMTP_HOST, { message: 'MAIL_TRANSPORT=smtp needs SMTP_HOST', path: ['SMTP_HOST'] });
 
@@ -58,6 +65,8 @@ export interface Config {
   authRateLimit: { max: number; ipMax: number; windowMs: number };
   /** Largest JSON body accepted (body-parser syntax). */
   jsonLimit: string;
+  /** Tombstones older than this are purged (every few hours while the server runs); older devices resync. */
+  tombstoneKeepDays: number;
 }
 
 /** Reads the JWT secret kept in the data folder, creating it (random, mode 0600) on first use. */
@@ -106,6 +115,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, secret: (dataDi
     logLevel: e.LOG_LEVEL,
     authRateLimit: { max: e.AUTH_RATE_LIMIT, ipMax: e.AUTH_RATE_LIMIT_PER_IP, windowMs: 15 * 60 * 1000 },
     jsonLimit: '2mb',
+    tombstoneKeepDays: e.TOMBSTONE_KEEP_DAYS,
   };
 }
 

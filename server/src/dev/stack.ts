@@ -10,6 +10,7 @@ import { loadConfig, type Config } from '../config';
 import { createDataSource, openAndMigrate } from '../db/data-source';
 import { openMailService, startMailWorker, type MailService } from '../modules/mail/mail-service';
 import { mailboxDir, mailSettingsFromConfig } from '../modules/mail/mail-settings';
+import { scheduleTombstonePurge } from '../modules/sync/tombstone-purge';
 import { startCluster, type PgCluster } from './pg-cluster';
 import { seedDemo, type SeedResult } from './seed-demo';
 
@@ -75,6 +76,8 @@ export async function startStack(opts: StackOptions): Promise<Stack> {
       if (n === 0) demo = await seedDemo(deps);
     }
     await startMailWorker(deps);
+    const purge = scheduleTombstonePurge(dataSource, { keepDays: config.tombstoneKeepDays, clock: systemClock, logger });
+    cleanups.push(() => purge.stop());
 
     const app = createApp(deps, { webDir: opts.webDir });
     const server: Server = await new Promise((ok, fail) => {
