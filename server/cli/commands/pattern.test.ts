@@ -1,19 +1,12 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { run } from './pattern';
-
-function capture() {
-  const out: string[] = [];
-  const err: string[] = [];
-  vi.spyOn(console, 'log').mockImplementation((...a: unknown[]) => void out.push(a.join(' ')));
-  vi.spyOn(console, 'error').mockImplementation((...a: unknown[]) => void err.push(a.join(' ')));
-  return { out, err };
-}
+import { captureOutput } from '../capture-output';
 
 afterEach(() => vi.restoreAllMocks());
 
 describe('loftline pattern', () => {
   it('--json prints one object with the documented fields; λ/2-high wire over perfect ground peaks near 30° (image theory)', async () => {
-    const io = capture();
+    const io = captureOutput();
     const lambda = 299.792458 / 14.2;
     const code = await run(['--mhz', '14.2', '--height-m', String(lambda / 2), '--ground', 'perfect', '--length-m', String(lambda / 2), '--json']);
     expect(code).toBe(0);
@@ -27,7 +20,7 @@ describe('loftline pattern', () => {
   });
 
   it('without --length-m the wire is cut by the 468/f rule; custom --sigma/--epsr and inverted-V work', async () => {
-    const io = capture();
+    const io = captureOutput();
     expect(await run(['--mhz', '7.1', '--height-m', '14', '--sigma', '0.01', '--epsr', '20', '--shape', 'inverted-v', '--apex-deg', '110', '--json'])).toBe(0);
     const j = JSON.parse(io.out.join('\n'));
     expect(j.input.lengthM / 0.3048).toBeCloseTo(468 / 7.1, 6);
@@ -35,7 +28,7 @@ describe('loftline pattern', () => {
   });
 
   it('text output names the figures and says the results are planning estimates', async () => {
-    const io = capture();
+    const io = captureOutput();
     expect(await run(['--mhz', '14.2', '--height-m', '10', '--ground', 'average'])).toBe(0);
     const text = io.out.join('\n');
     expect(text).toMatch(/Peak gain/);
@@ -52,7 +45,7 @@ describe('loftline pattern', () => {
       ['--mhz', '7.1', '--height-m', '3', '--ground', 'average', '--shape', 'inverted-v'],
       ['--mhz', '14', '--height-m', '10', '--ground', 'average', '--bogus'],
     ]) {
-      const io = capture();
+      const io = captureOutput();
       expect(await run(argv)).toBe(2);
       expect(io.err).toHaveLength(1);
       expect(io.err[0]).toMatch(/^pattern: /);
@@ -62,7 +55,7 @@ describe('loftline pattern', () => {
   });
 
   it('--help says the results are planning estimates', async () => {
-    const io = capture();
+    const io = captureOutput();
     expect(await run(['--help'])).toBe(0);
     expect(io.out.join('\n')).toMatch(/planning estimates/);
   });

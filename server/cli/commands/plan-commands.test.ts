@@ -3,19 +3,12 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { SAFETY_CAUTION } from '../../../shared/clearance/cautions';
+import { captureOutput } from '../capture-output';
 import * as assign from './assign';
 import * as demoSite from './demo-site';
 import * as propose from './propose';
 
 const dir = mkdtempSync(join(tmpdir(), 'loftline-plan-cli-'));
-
-function capture() {
-  const out: string[] = [];
-  const err: string[] = [];
-  vi.spyOn(console, 'log').mockImplementation((...a: unknown[]) => void out.push(a.join(' ')));
-  vi.spyOn(console, 'error').mockImplementation((...a: unknown[]) => void err.push(a.join(' ')));
-  return { out, err };
-}
 
 afterEach(() => vi.restoreAllMocks());
 
@@ -32,7 +25,7 @@ describe('demo-site, propose and assign commands', { timeout: 120_000 }, () => {
   });
 
   it('demo-site refuses bad arguments with one line and a non-zero exit', async () => {
-    const { err } = capture();
+    const { err } = captureOutput();
     expect(await demoSite.run(['--supports', 'many', '--seed', '1'])).toBe(2);
     expect(await demoSite.run(['--supports', '10'])).toBe(2);
     expect(err).toHaveLength(2);
@@ -40,7 +33,7 @@ describe('demo-site, propose and assign commands', { timeout: 120_000 }, () => {
   });
 
   it('propose prints ranked spots per station and the caution line', async () => {
-    const { out } = capture();
+    const { out } = captureOutput();
     expect(await propose.run(['--site', file, '--top', '2'])).toBe(0);
     const text = out.join('\n');
     expect(text).toMatch(/main-40 · 40m/);
@@ -49,7 +42,7 @@ describe('demo-site, propose and assign commands', { timeout: 120_000 }, () => {
   });
 
   it('propose --station --json gives that station only, as JSON with the cautions', async () => {
-    const { out } = capture();
+    const { out } = captureOutput();
     expect(await propose.run(['--site', file, '--station', 'dx-20', '--json'])).toBe(0);
     const json = JSON.parse(out.join('\n'));
     expect(json.caution).toBe(SAFETY_CAUTION);
@@ -57,7 +50,7 @@ describe('demo-site, propose and assign commands', { timeout: 120_000 }, () => {
   });
 
   it('assign prints the chosen spot per station and the caution line; --json parses', async () => {
-    const { out } = capture();
+    const { out } = captureOutput();
     expect(await assign.run(['--site', file])).toBe(0);
     expect(out.join('\n')).toMatch(/^Assignment \(branch-and-bound, proven best/);
     expect(out.join('\n').trim().endsWith(SAFETY_CAUTION)).toBe(true);
@@ -72,7 +65,7 @@ describe('demo-site, propose and assign commands', { timeout: 120_000 }, () => {
     bad.stations[0].powerW = -5;
     const badFile = join(dir, 'bad.json');
     writeFileSync(badFile, JSON.stringify(bad));
-    const { err } = capture();
+    const { err } = captureOutput();
     expect(await propose.run(['--site', badFile])).toBe(1);
     expect(err).toContain(`propose: ${badFile}: supports[2].heigthM: unknown field`);
     expect(err).toContain(`propose: ${badFile}: stations[0].powerW: power must be above 0`);
