@@ -2,7 +2,7 @@
 // kind, names from the records escaped in the HTML part, the cautions only where a spot is cleared.
 import { describe, expect, it } from 'vitest';
 import { CAUTION_LINES } from '../../shared/clearance/cautions';
-import { noticeMail, spotLink } from '../../server/src/modules/notifications/notification-mail';
+import { NO_CREW_NAMED_LINE, noticeMail, spotLink } from '../../server/src/modules/notifications/notification-mail';
 import type { SpotSummary } from '../../server/src/modules/notifications/notification-repository';
 
 const spot = (over: Partial<SpotSummary> = {}): SpotSummary => ({
@@ -12,6 +12,7 @@ const spot = (over: Partial<SpotSummary> = {}): SpotSummary => ({
   band: '40m',
   shape: 'inverted-v',
   stationName: 'CW station',
+  crewMemberIds: [],
   ...over,
 });
 const APP = 'https://loftline.kestrel.test/';
@@ -51,5 +52,22 @@ describe('review e-mail wording', () => {
     expect(m.text).toContain(`/events/${a.eventId}/sheets/${a.spotId}`);
     expect(m.text).toContain(`/events/${b.eventId}/sheets/${b.spotId}`);
     expect(m.text).toContain('20m flat-top dipole for CW station (Spring Outing)');
+  });
+
+  it('a sheet that went to every crew member says why (no crew named for the station); a named crew’s sheet does not', () => {
+    const all = noticeMail({ to: 'c@kestrel.test', displayName: 'C', appUrl: APP, items: [{ kind: 'sheetReady', spot: spot(), noCrewNamed: true }] });
+    expect(all.text).toContain('No crew is named for this station, so every crew member gets this.');
+    expect(all.html).toContain(`<em>${NO_CREW_NAMED_LINE}</em>`);
+    const own = noticeMail({ to: 'c@kestrel.test', displayName: 'C', appUrl: APP, items: [{ kind: 'sheetReady', spot: spot({ crewMemberIds: ['33333333-3333-4333-8333-333333333333'] }) }] });
+    expect(own.text).not.toContain('No crew is named');
+    expect(own.html).not.toContain('No crew is named');
+  });
+
+  it('a lead named as crew hears "cleared" and "sheet ready" of one spot in one e-mail whose subject counts the spot once', () => {
+    const s = spot();
+    const m = noticeMail({ to: 'l@kestrel.test', displayName: 'L', appUrl: APP, items: [{ kind: 'spotCleared', spot: s }, { kind: 'sheetReady', spot: s }] });
+    expect(m.subject).toBe('Safety review news on an antenna spot · Midwinter Field Outing');
+    expect(m.text).toContain(`/events/${s.eventId}/plan`);
+    expect(m.text).toContain(`/events/${s.eventId}/sheets/${s.spotId}`);
   });
 });

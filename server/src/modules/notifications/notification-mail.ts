@@ -5,7 +5,10 @@ import { escapeHtml } from '../mail/escape-html';
 import type { MailMessage } from '../mail/mail-message';
 import type { SpotSummary } from './notification-repository';
 
-export type NoticeItem = { kind: NotificationKind; spot: SpotSummary };
+/** `noCrewNamed`: a "sheet ready" that reached every crew member because the spot's station names no crew. */
+export type NoticeItem = { kind: NotificationKind; spot: SpotSummary; noCrewNamed?: boolean };
+
+export const NO_CREW_NAMED_LINE = 'No crew is named for this station, so every crew member gets this.';
 
 const SHAPE_WORDS: Record<string, string> = { flat: 'flat-top dipole', 'inverted-v': 'inverted-V dipole' };
 
@@ -46,7 +49,9 @@ function subjectOf(items: readonly NoticeItem[]): string {
   const events = [...new Set(items.map((i) => i.spot.eventName))];
   const where = events.length === 1 ? ` · ${events[0]}` : '';
   const n = items.length;
-  if (kinds.length > 1) return `Safety review news on ${n} antenna spots${where}`;
+  // A lead named as a station's crew hears "cleared" and "sheet ready" of the same spot: count the spots once.
+  const spotCount = new Set(items.map((i) => i.spot.spotId)).size;
+  if (kinds.length > 1) return spotCount === 1 ? `Safety review news on an antenna spot${where}` : `Safety review news on ${spotCount} antenna spots${where}`;
   const plural = n > 1;
   switch (kinds[0]) {
     case 'reviewWaiting':
@@ -73,11 +78,13 @@ export function noticeMail(input: { to: string; displayName: string; appUrl: str
   for (const s of sections) {
     const words = SECTION[s.kind];
     const lead = s.items.length === 1 ? words.one : words.many(s.items.length);
-    text.push([lead, ...s.items.map((i) => `- ${describe(i.spot)}\n  ${spotLink(input.appUrl, s.kind, i.spot)}`), words.after].join('\n'));
+    const note = (i: NoticeItem) => (i.noCrewNamed ? `\n  ${NO_CREW_NAMED_LINE}` : '');
+    text.push([lead, ...s.items.map((i) => `- ${describe(i.spot)}\n  ${spotLink(input.appUrl, s.kind, i.spot)}${note(i)}`), words.after].join('\n'));
     const lis = s.items
       .map((i) => {
         const href = escapeHtml(spotLink(input.appUrl, s.kind, i.spot));
-        return `<li>${escapeHtml(describe(i.spot))}<br><a href="${href}" style="color: #14532d">${href}</a></li>`;
+        const noteHtml = i.noCrewNamed ? `<br><em>${escapeHtml(NO_CREW_NAMED_LINE)}</em>` : '';
+        return `<li>${escapeHtml(describe(i.spot))}<br><a href="${href}" style="color: #14532d">${href}</a>${noteHtml}</li>`;
       })
       .join('\n');
     html.push(`<p>${escapeHtml(lead)}</p>\n<ul>\n${lis}\n</ul>\n<p>${escapeHtml(words.after)}</p>`);

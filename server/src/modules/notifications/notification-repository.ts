@@ -64,22 +64,69 @@ export async function claimEventKeys(db: Db, clubId: string, keys: string[]): Pr
   return new Set(rows.map((r) => r.event_key));
 }
 
-export type SpotSummary = { spotId: string; eventId: string; eventName: string; band: string; shape: string; stationName: string };
+export type SpotSummary = {
+  spotId: string;
+  eventId: string;
+  eventName: string;
+  band: string;
+  shape: string;
+  stationName: string;
+  /** The people the spot's station names as its crew (stations.crewMemberIds); empty when none is named. */
+  crewMemberIds: string[];
+};
 
 /** The live spots among `spotIds` in the club, with their event and station names for the e-mail. */
 export async function spotSummaries(db: Db, clubId: string, spotIds: string[]): Promise<Map<string, SpotSummary>> {
   if (spotIds.length === 0) return new Map();
-  const rows: { id: string; event_id: string; event_name: string | null; band: string; shape: string; station_name: string | null }[] = await db.query(
-    `SELECT s.id, s.event_id, e.name AS event_name, s.band, s.shape, st.name AS station_name FROM antenna_spots s
+  const rows: { id: string; event_id: string; event_name: string | null; band: string; shape: string; station_name: string | null; crew: unknown }[] = await db.query(
+    `SELECT s.id, s.event_id, e.name AS event_name, s.band, s.shape, st.name AS station_name, st.crew_member_ids AS crew FROM antenna_spots s
      LEFT JOIN events e ON e.id = s.event_id AND e.club_id = s.club_id
-     LEFT JOIN stations st ON st.id = s.station_id AND st.club_id = s.club_id
+     LEFT JOIN stations st ON st.id = s.station_id AND st.club_id = s.club_id AND st.deleted_at IS NULL
      WHERE s.club_id = $1 AND s.id = ANY($2::uuid[]) AND s.deleted_at IS NULL`,
     [clubId, spotIds],
   );
   return new Map(
     rows.map((r) => [
       r.id,
-      { spotId: r.id, eventId: r.event_id, eventName: r.event_name ?? 'your event', band: r.band, shape: r.shape, stationName: r.station_name ?? 'a station' },
+      {
+        spotId: r.id,
+        eventId: r.event_id,
+        eventName: r.event_name ?? 'your event',
+        band: r.band,
+        shape: r.shape,
+        stationName: r.station_name ?? 'a station',
+        crewMemberIds: Array.isArray(r.crew) ? r.crew.filter((x): x is string => typeof x === 'string') : [],
+      },
     ]),
   );
+}
+
+/**
+ * Who gets a spot's "sheet ready": the station's named crew who are still members of the club (any role: a lead
+ * often raises antennas too), less those who turned it off. `named: false` when the station names no one who is
+ * still a member, and then the caller falls back to every crew member (recipientsOf 'sheetReady').
+ */
+export async function namedCrewOf(db: Db, clubId: string, crewMemberIds: readonly string[]): Promise<{ named: boolean; recipients: Recipient[] }> {
+  if (crewMemberIds.length === 0) return { named: false, recipients: [] };
+  const rows: { user_id: string; email: string; display_name: string; wants: boolean }[] = await db.query(
+    `SELECT u.id AS user_id, u.email, u.display_name, COALESCE(s.sheet_ready, true) AS wants FROM memberships m
+     JOIN users u ON u.id = m.user_id
+     LEFT JOIN notification_settings s ON s.club_id = m.club_id AND s.user_id = m.user_id
+     WHERE m.club_id = $1 AND m.user_id = ANY($2::uuid[])
+     ORDER BY u.email`,
+    [clubId, [...new Set(crewMemberIds)]],
+  );
+  return {
+    named: rows.length > 0,
+    recipients: rows.filter((r) => r.wants).map((r) => ({ userId: r.user_id, email: r.email, displayName: r.display_name })),
+  };
+}
+
+/** True when the person is named as crew of any live station of the club (they then hear of "sheet ready"). */
+export async function isNamedCrew(db: Db, clubId: string, userId: string): Promise<boolean> {
+  const [row]: { named: boolean }[] = await db.query(
+    `SELECT EXISTS (SELECT 1 FROM stations WHERE club_id = $1 AND deleted_at IS NULL AND crew_member_ids @> jsonb_build_array($2::text)) AS named`,
+    [clubId, userId],
+  );
+  return !!row?.named;
 }

@@ -8,7 +8,7 @@ import type { AfterApplyHook, AppliedPush } from '../sync/after-apply';
 import { eventKey, spotEventsOf, type SpotEvent } from './notification-events';
 import { noticeMail, type NoticeItem } from './notification-mail';
 import { spotsClearedByDecisions } from '../review/cleared-by-decisions';
-import { claimEventKeys, recipientsOf, spotSummaries, type Recipient } from './notification-repository';
+import { claimEventKeys, namedCrewOf, recipientsOf, spotSummaries, type Recipient } from './notification-repository';
 
 /** Who hears of a spot event, by notification kind: a cleared spot tells the lead and readies the crews' sheets. */
 const KINDS_OF_EVENT: Record<SpotEvent['kind'], NotificationKind[]> = {
@@ -36,13 +36,25 @@ export function notificationsAfterApply(deps: Pick<AppDeps, 'config' | 'mail' | 
       // Batch: every notice of this push for one person goes into one e-mail.
       const byPerson = new Map<string, { who: Recipient; items: NoticeItem[] }>();
       const audience = new Map<NotificationKind, Recipient[]>();
+      const roleAudience = async (kind: NotificationKind) => {
+        if (!audience.has(kind)) audience.set(kind, await recipientsOf(em, push.clubId, kind));
+        return audience.get(kind)!;
+      };
       for (const e of fresh) {
+        const spot = spots.get(e.spotId)!;
         for (const kind of KINDS_OF_EVENT[e.kind]) {
-          if (!audience.has(kind)) audience.set(kind, await recipientsOf(em, push.clubId, kind));
-          for (const who of audience.get(kind)!) {
-            const entry = byPerson.get(who.userId) ?? { who, items: [] };
-            entry.items.push({ kind, spot: spots.get(e.spotId)! });
-            byPerson.set(who.userId, entry);
+          let who: Recipient[];
+          let noCrewNamed = false;
+          if (kind === 'sheetReady') {
+            // The station's own crew; a station that names no one (still a member) readies every crew member.
+            const crew = await namedCrewOf(em, push.clubId, spot.crewMemberIds);
+            noCrewNamed = !crew.named;
+            who = crew.named ? crew.recipients : await roleAudience(kind);
+          } else who = await roleAudience(kind);
+          for (const person of who) {
+            const entry = byPerson.get(person.userId) ?? { who: person, items: [] };
+            entry.items.push({ kind, spot, ...(noCrewNamed ? { noCrewNamed } : {}) });
+            byPerson.set(person.userId, entry);
           }
         }
       }

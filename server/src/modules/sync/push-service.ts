@@ -21,6 +21,7 @@ import { rowFromJson, selectForUpdateSql, upsertSql, type RowState } from './row
 import { mayWrite } from '../../../../sync/protocol';
 import { runAfterApply, type AfterApplyHook } from './after-apply';
 import { createReviewGuard } from '../review/review-guard';
+import { createStationCrewGuard } from './station-crew-guard';
 
 export interface PushContext {
   clubId: string;
@@ -90,6 +91,7 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
   const foreign = new Set([...rows.entries()].filter(([, r]) => r.clubId !== ctx.clubId).map(([k]) => k));
 
   const reviewGuard = createReviewGuard(em, ctx.clubId, ctx.userId);
+  const crewGuard = createStationCrewGuard(em, ctx.clubId);
   const dirty = new Set<string>();
   const conflicts: PendingConflict[] = [];
   const newRejections: { m: Mutation; r: Rejection }[] = [];
@@ -138,8 +140,10 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
       }
       // A review decision is judged again here against the club's records (a blocked result is never accepted).
       const reviewProblem = m.collection === 'reviewDecisions' ? await reviewGuard.check(checked.fields as Parameters<typeof reviewGuard.check>[0]) : null;
-      if (reviewProblem) {
-        refuse('invalid', reviewProblem);
+      // A station's crew must be members of this club (they are who its sheet e-mails go to).
+      const crewProblem = m.collection === 'stations' ? await crewGuard.check((checked.fields as { crewMemberIds?: string[] }).crewMemberIds) : null;
+      if (reviewProblem || crewProblem) {
+        refuse('invalid', (reviewProblem ?? crewProblem)!);
         continue;
       }
       rows.set(key, newRow(m.collection, m.recordId, ctx.clubId, checked.fields, clock, nowIso));
@@ -149,6 +153,12 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
     const checked = checkEditedFields(m.collection, m.fields);
     if (!checked.ok) {
       refuse('invalid', checked.message, checked.details);
+      continue;
+    }
+    // Only the crew this change names is judged: a member who left later does not block other edits of the station.
+    const editCrewProblem = m.collection === 'stations' ? await crewGuard.check((checked.fields as { crewMemberIds?: string[] }).crewMemberIds) : null;
+    if (editCrewProblem) {
+      refuse('invalid', editCrewProblem);
       continue;
     }
     const r = mergeMutation(m.collection, existing, { op: 'upsert', fields: checked.fields, baseClocks: m.baseClocks, clock }, nowIso);
