@@ -1,5 +1,5 @@
 import { type IDBPDatabase, openDB } from 'idb';
-import { StorageFullError, isQuotaError } from '../store/types';
+import { settleIdbTransaction } from '../store/idb-transaction';
 import { createPhotoStoreFromTx } from './photo-store-core';
 import type { PhotoStore, PhotoStoreTx, QueuedPhoto } from './types';
 
@@ -32,7 +32,6 @@ export async function openIdbPhotoStore(name: string): Promise<PhotoStore> {
   return createPhotoStoreFromTx(
     async (mode, fn) => {
       const tx = db.transaction([...STORES], mode);
-      const done = tx.done.catch((err: unknown) => err);
       const photos = tx.objectStore('photos');
       const bytes = tx.objectStore('photoBytes');
       const ops: PhotoStoreTx = {
@@ -42,21 +41,7 @@ export async function openIdbPhotoStore(name: string): Promise<PhotoStore> {
         getBytes: (key) => bytes.get(key),
         putBytes: async (key, data) => void (await bytes.put!(data, key)),
       };
-      try {
-        const result = await fn(ops);
-        const outcome = await done;
-        if (outcome) throw outcome;
-        return result;
-      } catch (err) {
-        try {
-          tx.abort();
-        } catch {
-          // already finished or aborted
-        }
-        await done;
-        if (isQuotaError(err) || isQuotaError(tx.error)) throw new StorageFullError(err);
-        throw err;
-      }
+      return settleIdbTransaction(tx, () => fn(ops));
     },
     async () => db.close(),
   );

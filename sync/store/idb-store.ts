@@ -1,12 +1,13 @@
 import { openDB, type IDBPDatabase, type IDBPTransaction } from 'idb';
 import type { CollectionName } from '../../shared/schemas';
 import { createStoreFromTx, type StoreTx, type TxMode } from './store-core';
-import { StorageFullError, isQuotaError, type BeforeCommitHook, type LocalStore } from './types';
+import { settleIdbTransaction } from './idb-transaction';
+import type { BeforeCommitHook, LocalStore } from './types';
 
 /*
  * The device database in IndexedDB through `idb`. One database per signed-in person and club, four object
  * stores; every LocalStore method is a single IndexedDB transaction over all of them, so a record change and its
- * outbox entry (or a pull page and its cursor) commit together or not at all. Only this file touches IndexedDB.
+ * outbox entry (or a pull page and its cursor) commit together or not at all (idb-transaction.ts waits for the commit).
  */
 
 const DB_VERSION = 1;
@@ -69,24 +70,11 @@ export async function openIdbStore(options: IdbStoreOptions): Promise<LocalStore
   const db = await open(options.name);
   const run = async <T>(mode: TxMode, operation: string, fn: (tx: StoreTx) => Promise<T>): Promise<T> => {
     const tx = db.transaction([...STORES], mode) as unknown as Tx;
-    // The transaction's completion promise rejects on abort; observe it so that it never goes unhandled.
-    const done = tx.done.catch((err: unknown) => err);
-    try {
+    return settleIdbTransaction(tx, async () => {
       const result = await fn(txOps(tx));
       if (mode === 'readwrite') options.beforeCommit?.(operation as Parameters<BeforeCommitHook>[0]);
-      const outcome = await done;
-      if (outcome instanceof Error || (outcome && typeof outcome === 'object' && 'name' in outcome)) throw outcome;
       return result;
-    } catch (err) {
-      try {
-        tx.abort();
-      } catch {
-        // already finished or aborted
-      }
-      await done;
-      if (isQuotaError(err) || isQuotaError(tx.error)) throw new StorageFullError(err);
-      throw err;
-    }
+    });
   };
   return createStoreFromTx(run, async () => db.close());
 }
