@@ -127,13 +127,36 @@ export function flatTopBetween(a: ModelSupport, b: ModelSupport, spec: BandSpec,
   };
 }
 
-/** Inverted-V dipoles with the apex at support s, one per leg direction; none when the ends would be too low. */
-export function invertedVsAt(s: ModelSupport, spec: BandSpec, ground: Ground, opts: PlanOptions): SpanGeometry[] {
+/**
+ * How far out from the foot of the support each leg end of an inverted-V lies, horizontally: the leg is the
+ * hypotenuse and apex/2 the angle it makes with the vertical, so the offset is leg·sin(apex/2) (plain
+ * right-triangle trigonometry; the drop below the apex is leg·cos(apex/2)).
+ */
+export function legEndOffsetM(legM: number, apexDeg: number): number {
+  return legM * Math.sin(((apexDeg / 2) * Math.PI) / 180);
+}
+
+/** A leg bearing folded into [0, 180): a wire laid along 210° is the same wire as one along 30°. */
+export function foldBearingDeg(azDeg: number): number {
+  return ((azDeg % 180) + 180) % 180;
+}
+
+/**
+ * Inverted-V dipoles with the apex at support s, one per leg direction (the options' directions unless
+ * `azimuthsDeg` names others, such as the bearing a lead chose); none when the ends would be too low.
+ */
+export function invertedVsAt(
+  s: ModelSupport,
+  spec: BandSpec,
+  ground: Ground,
+  opts: PlanOptions,
+  azimuthsDeg: readonly number[] = opts.invertedVAzimuthsDeg,
+): SpanGeometry[] {
   const legM = spec.wireLengthM / 2;
   const half = (opts.invertedVApexDeg / 2) * (Math.PI / 180);
   const endHeightM = s.attachHeightM - legM * Math.cos(half);
   if (endHeightM < opts.minWireHeightM) return [];
-  const reachM = legM * Math.sin(half);
+  const reachM = legEndOffsetM(legM, opts.invertedVApexDeg);
   const apexB = bucket(s.attachHeightM, spec, opts);
   const patternInput: DipoleInput = {
     freqMhz: spec.freqMhz,
@@ -143,7 +166,7 @@ export function invertedVsAt(s: ModelSupport, spec: BandSpec, ground: Ground, op
     lengthM: spec.wireLengthM,
     apexDeg: opts.invertedVApexDeg,
   };
-  return opts.invertedVAzimuthsDeg.map((azDeg) => {
+  return azimuthsDeg.map((azDeg) => {
     const az = (azDeg * Math.PI) / 180;
     const dx = Math.sin(az) * reachM;
     const dy = Math.cos(az) * reachM;
@@ -163,8 +186,8 @@ export function invertedVsAt(s: ModelSupport, spec: BandSpec, ground: Ground, op
       ropeEachEndM: null,
       endHeightsM: [endHeightM, endHeightM] as [number, number],
       apexDeg: opts.invertedVApexDeg,
-      wireAzimuthDeg: azDeg % 180,
-      broadsideDeg: broadside(azDeg % 180),
+      wireAzimuthDeg: foldBearingDeg(azDeg),
+      broadsideDeg: broadside(foldBearingDeg(azDeg)),
       wire: [
         [e1, s.at],
         [s.at, e2],

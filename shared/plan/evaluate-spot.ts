@@ -1,7 +1,7 @@
 import type { BandName } from '../bands';
 import { makeCoaxChooser } from '../coax/coax-run';
 import { type SiteFile } from '../schemas/site-file';
-import { bandSpec, flatTopBetween, invertedVsAt } from './candidates';
+import { bandSpec, flatTopBetween, foldBearingDeg, invertedVsAt } from './candidates';
 import { type Candidate, evaluateCandidate } from './evaluate';
 import { type PlanOptionsInput, resolvePlanOptions } from './options';
 import { type DipoleInput, freeSpaceAzimuthGainsDbi, patternSummary } from './physics';
@@ -13,6 +13,12 @@ export type SpotToEvaluate = {
   band: BandName;
   shape: 'flat' | 'inverted-v';
   supportIds: readonly string[];
+  /**
+   * An inverted-V's leg bearing, degrees true (folded into [0, 180)): the wire is evaluated at exactly this
+   * bearing, whether or not it is one of the options' directions. Null or absent: the candidate id below,
+   * else the best-ranked direction. Ignored for a flat-top (its supports fix the bearing).
+   */
+  legAzimuthDeg?: number | null;
   /** A candidate id from planSite (picks the inverted-V leg direction); without it the best-ranked direction. */
   geometryId?: string;
 };
@@ -27,8 +33,8 @@ export type EvaluatedSpot = {
  * The full checks of ONE spot, whether or not it is among the top-ranked candidates: what the safety review
  * (app and server alike) judges a recorded spot by. Null when the spot cannot be built any more (a support
  * is gone or has no height, the span no longer fits the wire), which the review treats as "cannot be cleared".
- * Inverted-V leg direction: the given candidate id, else the same order planSite ranks by (usable first,
- * best score, then id), so every device picks the same one.
+ * Inverted-V leg direction: the given bearing, else the given candidate id, else the same order planSite
+ * ranks by (usable first, best score, then id), so every device picks the same one.
  */
 export function evaluateSpot(site: SiteFile, spot: SpotToEvaluate, options: PlanOptionsInput = {}): EvaluatedSpot | null {
   const opts = resolvePlanOptions(options);
@@ -38,15 +44,16 @@ export function evaluateSpot(site: SiteFile, spot: SpotToEvaluate, options: Plan
   const supports = spot.supportIds.map((id) => model.supports.find((s) => s.id === id));
   if (supports.some((s) => !s)) return null;
   const spec = bandSpec(spot.band, need.freqMhz, opts);
+  const pinned = spot.shape === 'inverted-v' && typeof spot.legAzimuthDeg === 'number' && Number.isFinite(spot.legAzimuthDeg) ? foldBearingDeg(spot.legAzimuthDeg) : null;
   const geoms =
     spot.shape === 'flat'
       ? supports.length === 2
         ? [flatTopBetween(supports[0]!, supports[1]!, spec, model.ground, opts)].filter((g) => g !== null)
         : []
       : supports.length === 1
-        ? invertedVsAt(supports[0]!, spec, model.ground, opts)
+        ? invertedVsAt(supports[0]!, spec, model.ground, opts, pinned === null ? undefined : [pinned])
         : [];
-  const chosen = spot.geometryId ? geoms.filter((g) => g.id === spot.geometryId) : geoms;
+  const chosen = spot.geometryId && pinned === null ? geoms.filter((g) => g.id === spot.geometryId) : geoms;
   if (chosen.length === 0) return null;
   const chooser = makeCoaxChooser(model.coax, need.freqMhz);
   const rows = chosen.map((geom) => {

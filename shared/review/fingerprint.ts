@@ -4,8 +4,10 @@ import type { Hazard, Site, Support } from '../schemas/records';
  * A spot's inputs fingerprint: what its clearances were computed from. A review decision stores the
  * fingerprint it was made against; when the supports, hazards or ground change, the fingerprint changes,
  * the old decisions no longer apply and the spot goes back to review, with the reason named.
- * Format: "v1.s<hash>.s<hash>.h<hash>.g<hash>" (one part per support of the spot, in order, then all
- * hazards of the site, then the ground), each hash 8 hex digits of FNV-1a 32 over canonical JSON.
+ * Format: "v1.s<hash>.s<hash>.h<hash>.g<hash>[.l<hash>]" (one part per support of the spot, in order, then
+ * all hazards of the site, then the ground, then an inverted-V's chosen leg bearing when it has one), each
+ * hash 8 hex digits of FNV-1a 32 over canonical JSON. The leg part is left out when no bearing is chosen,
+ * so spots reviewed before bearings were recorded keep their fingerprint and their decisions.
  */
 
 function fnv1a32(text: string): string {
@@ -48,6 +50,8 @@ export type FingerprintInputs = {
   supportIds: readonly string[];
   supports: readonly Support[];
   hazards: readonly Hazard[];
+  /** The inverted-V leg bearing the lead chose (antennaSpots.legAzimuthDeg); null or absent when none. */
+  legAzimuthDeg?: number | null;
 };
 
 export function spotFingerprint(inputs: FingerprintInputs): string {
@@ -55,7 +59,18 @@ export function spotFingerprint(inputs: FingerprintInputs): string {
   const parts = inputs.supportIds.map((id) => `s${fnv1a32(canonical(supportPart(byId.get(id))))}`);
   parts.push(`h${fnv1a32(canonical(hazardPart(inputs.hazards)))}`);
   parts.push(`g${fnv1a32(canonical(groundPart(inputs.site)))}`);
+  if (typeof inputs.legAzimuthDeg === 'number') parts.push(`l${fnv1a32(canonical({ legAzimuthDeg: inputs.legAzimuthDeg }))}`);
   return `v1.${parts.join('.')}`;
+}
+
+/** The parts of a fingerprint by kind: the support parts in order, and the single hazard, ground and leg parts. */
+function partsOf(fingerprint: string) {
+  const [version, ...rest] = fingerprint.split('.');
+  return {
+    version,
+    supports: rest.filter((p) => p[0] === 's'),
+    single: (tag: string) => rest.find((p) => p[0] === tag) ?? null,
+  };
 }
 
 /**
@@ -64,16 +79,15 @@ export function spotFingerprint(inputs: FingerprintInputs): string {
  */
 export function fingerprintChanges(before: string, after: string, supportLabels: readonly string[]): string[] {
   if (before === after) return [];
-  const a = before.split('.');
-  const b = after.split('.');
-  if (a[0] !== b[0] || a.length !== b.length) return ['The spot was recomputed from different inputs since the review.'];
+  const a = partsOf(before);
+  const b = partsOf(after);
+  if (a.version !== b.version || a.supports.length !== b.supports.length) return ['The spot was recomputed from different inputs since the review.'];
   const out: string[] = [];
-  for (let i = 1; i < a.length; i++) {
-    if (a[i] === b[i]) continue;
-    const tag = b[i][0];
-    if (tag === 's') out.push(`${supportLabels[i - 1] ?? 'A support'} changed since the review (position, height or ends).`);
-    else if (tag === 'h') out.push('A hazard on the site (power line, path, road, parking, building or water) changed since the review.');
-    else if (tag === 'g') out.push('The ground recorded for the site changed since the review.');
-  }
+  b.supports.forEach((part, i) => {
+    if (part !== a.supports[i]) out.push(`${supportLabels[i] ?? 'A support'} changed since the review (position, height or ends).`);
+  });
+  if (a.single('h') !== b.single('h')) out.push('A hazard on the site (power line, path, road, parking, building or water) changed since the review.');
+  if (a.single('g') !== b.single('g')) out.push('The ground recorded for the site changed since the review.');
+  if (a.single('l') !== b.single('l')) out.push('The direction the inverted-V’s legs run changed since the review: the wire now hangs over different ground.');
   return out;
 }

@@ -1,14 +1,8 @@
 import { describe, expect, test } from 'vitest';
-import type { AntennaSpot, Hazard, ReviewDecision, Site, Station, Support } from '../schemas/records';
+import type { AntennaSpot, Hazard, ReviewDecision, Station, Support } from '../schemas/records';
+import { at, meta, T, testSite as site, uuid } from './test-records';
 import { evaluateEventSpots, spotSeparations } from './index';
 
-const T = '2026-12-01T10:00:00.000Z';
-const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
-const meta = (n: number) => ({ id: uuid(n), clubId: uuid(999), createdAt: T, updatedAt: T, deletedAt: null });
-const REF = { lat: 44.9312, lon: -92.8671 };
-const at = (e: number, n: number) => ({ lat: REF.lat + n / 111_320, lon: REF.lon + e / (111_320 * Math.cos((REF.lat * Math.PI) / 180)) });
-
-const site: Site = { ...meta(1), name: 'Meadow', refLat: REF.lat, refLon: REF.lon, notes: '', groundDescription: '', groundClass: 'average', groundSigmaSPerM: null, groundEpsR: null, accessNotes: '', rules: '' };
 const tree = (n: number, e: number, north: number, over: Partial<Support> = {}): Support => ({
   ...meta(n), siteId: site.id, kind: 'tree', label: `Tree ${n}`, ...at(e, north), positionAccuracyM: 3, heightM: 18, attachHeightM: 14, launchMethod: 'throw-bag', maxEnds: 2, species: '', condition: '', mastModel: '', notes: '', ...over,
 });

@@ -31,9 +31,11 @@ export function evaluateEventSpots(records: SiteRecords, spots: readonly Antenna
   const out: SpotEvaluation[] = [];
   for (const spot of spots) {
     if (spot.deletedAt !== null) continue;
-    const evaluated = evaluateSpot(build.file, { stationId: spot.stationId, band: spot.band, shape: spot.shape, supportIds: spot.supportIds });
+    // The recorded leg bearing is the wire the lead chose: judge that one, not whichever direction ranks best now.
+    const legAzimuthDeg = spot.shape === 'inverted-v' ? spot.legAzimuthDeg : null;
+    const evaluated = evaluateSpot(build.file, { stationId: spot.stationId, band: spot.band, shape: spot.shape, supportIds: spot.supportIds, legAzimuthDeg });
     const results = evaluated ? reviewResultsOf(evaluated.candidate.clearances) : [];
-    const fingerprint = spotFingerprint({ site: records.site, supportIds: spot.supportIds, supports: records.supports, hazards: records.hazards });
+    const fingerprint = spotFingerprint({ site: records.site, supportIds: spot.supportIds, supports: records.supports, hazards: records.hazards, legAzimuthDeg });
     const supportLabels = spot.supportIds.map((id) => label.get(id) ?? 'A removed support');
     const mine = decisions.filter((d) => d.spotId === spot.id);
     const review = reviewSpot({ spot, results, decisions: mine, currentFingerprint: fingerprint, supportLabels });
