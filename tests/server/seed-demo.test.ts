@@ -63,6 +63,37 @@ describe('seedDemo', () => {
     for (const s of placed) expect(s.coaxPieceIds.length, `${s.needKey}: ${s.coaxNote ?? ''}`).toBeGreaterThan(0);
   }, 60_000);
 
+  // The tempting roadside tree (issue 7's "one spot near the demo power line … blocked"): 16 m tall about 8 m
+  // from the 12.47 kV line, so any fall reaches it; the rule is NCVEC Technician pool T0B06 (10 ft beyond a fall).
+  it('the roadside elm beside the demo power line blocks every antenna on it, and the demo plan never places a wire there', async () => {
+    await seedDemo(t.deps);
+    const all = async (c: CollectionName) => (await t.deps.dataSource.getRepository(SYNCED_ENTITIES[c]).find()) as never[];
+    const [site] = (await all('sites')) as SiteRecords['site'][];
+    const supports = (await all('supports')) as SiteRecords['supports'][number][];
+    const elm = supports.find((s) => s.label === 'Roadside elm')!;
+    expect(elm.notes).toMatch(/power line/);
+    const [power] = ((await all('hazards')) as SiteRecords['hazards'][number][]).filter((h) => h.kind === 'power-line');
+    const records = (withElm: boolean): SiteRecords => ({
+      site,
+      supports: withElm ? supports : supports.filter((s) => s.id !== elm.id),
+      hazards: [power!],
+      operatingPositions: [],
+      stations: [] as never[],
+      coax: [],
+    });
+    const stations = (await all('stations')) as SiteRecords['stations'][number][];
+    const plan = (withElm: boolean) => planSite(siteFileFromRecords({ ...records(withElm), stations }).file);
+    const withElm = plan(true);
+    for (const a of withElm.antennas) {
+      expect(a.blockedCount, a.need.key).toBeGreaterThan(0);
+      expect(a.blockedBy.map((b) => b.key)).toEqual([`power-line:${power!.id}`]);
+      for (const c of a.ranked) if (c.supportIds.includes(elm.id)) expect(c.level).toBe('blocked');
+    }
+    for (const s of withElm.assignment.spots) expect(s.candidate?.supportIds ?? []).not.toContain(elm.id);
+    // Without the elm nothing in the park is blocked: the blocks above are the elm's.
+    for (const a of plan(false).antennas) expect(a.blockedCount, a.need.key).toBe(0);
+  }, 60_000);
+
   it('the outing starts on the first Saturday at least three weeks out and lasts two days', () => {
     expect(demoEventDays(new Date('2026-12-01T12:00:00Z'))).toEqual({ startsOn: '2026-12-26', endsOn: '2026-12-27' });
     expect(demoEventDays(new Date('2026-12-05T12:00:00Z'))).toEqual({ startsOn: '2026-12-26', endsOn: '2026-12-27' });

@@ -46,7 +46,7 @@ describe('startStack', () => {
               (SELECT count(*) FROM operating_positions) AS positions, (SELECT count(*) FROM events WHERE name = $1) AS events`,
       [DEMO_EVENT_NAME],
     );
-    expect(counts[0]).toEqual({ trees: 8, masts: 2, lines: 1, positions: 2, events: 1 });
+    expect(counts[0]).toEqual({ trees: 9, masts: 2, lines: 1, positions: 2, events: 1 });
     const [event] = await stack.deps.dataSource.query('SELECT starts_on FROM events');
     expect(event.starts_on > new Date().toISOString().slice(0, 10)).toBe(true);
   });

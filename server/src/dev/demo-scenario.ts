@@ -36,10 +36,10 @@ export interface DemoSupport {
   fields: Omit<CollectionFields<'supports'>, 'siteId' | 'lat' | 'lon'>;
 }
 
-const tree = (key: string, label: string, species: string, heightM: number, attachHeightM: number, launch: CollectionFields<'supports'>['launchMethod'], at: Offset, condition: string): DemoSupport => ({
+const tree = (key: string, label: string, species: string, heightM: number, attachHeightM: number, launch: CollectionFields<'supports'>['launchMethod'], at: Offset, condition: string, notes = ''): DemoSupport => ({
   key,
   at,
-  fields: { kind: 'tree', label, species, heightM, attachHeightM, launchMethod: launch, positionAccuracyM: 4, maxEnds: 2, condition, mastModel: '', notes: '' },
+  fields: { kind: 'tree', label, species, heightM, attachHeightM, launchMethod: launch, positionAccuracyM: 4, maxEnds: 2, condition, mastModel: '', notes },
 });
 
 export const DEMO_SUPPORTS: DemoSupport[] = [
@@ -51,6 +51,10 @@ export const DEMO_SUPPORTS: DemoSupport[] = [
   tree('t6', 'Red cedar pair', 'eastern red cedar', 9, 7, 'hand-throw', { e: -22, n: -62 }, 'Dense; only the tops are reachable'),
   tree('t7', 'Honey locust', 'honey locust', 15, 12, 'throw-bag', { e: 88, n: 8 }, 'Thorny trunk: wear gloves'),
   tree('t8', 'Ash at the bend', 'green ash', 19, 15, 'slingshot', { e: -35, n: 86 }, 'Some ash dieback; check limbs before loading'),
+  // The road edge is tempting (the tallest open tree near the north-east corner), so the scout recorded it; it
+  // stands about 8 m from the distribution line, so the planning engine must block any wire on it.
+  tree('t9', 'Roadside elm', 'American elm', 16, 12, 'throw-bag', { e: 126, n: 55 }, 'Healthy; open crown over the road verge',
+    'Beside the county road power line, about 8 m from the conductors between the second and third poles. Recorded so nobody plans on it by mistake.'),
   {
     key: 'm1',
     at: { e: -5, n: 12 },
