@@ -138,5 +138,24 @@ export const conflictEntrySchema = z.strictObject({
   otherClock: hlcStringSchema,
   otherBy: idSchema.nullable(),
   createdAt: isoInstantSchema,
+  /** When a lead or admin settled it (null: still open), who, which value they chose, and why. */
+  resolvedAt: isoInstantSchema.nullable(),
+  resolvedBy: idSchema.nullable(),
+  choice: z.enum(['kept', 'other']).nullable(),
+  note: z.string().nullable(),
 });
 export type ConflictEntry = z.infer<typeof conflictEntrySchema>;
+
+/** Server-assigned ids of conflict and refused-change entries (bigserial). */
+export const problemIdSchema = z.string().regex(/^[1-9]\d{0,17}$/, 'id must be a positive whole number');
+
+/**
+ * POST …/sync/conflicts/:conflictId/resolve. "kept": the value the merge kept stays; "other": the lead has written
+ * the other value through sync as an ordinary change (the server does not write it here, so review of affected
+ * spots re-opens through the same path as any other edit).
+ */
+export const resolveConflictBodySchema = z.strictObject({
+  choice: z.enum(['kept', 'other'], { message: "choice must be 'kept' or 'other'" }),
+  note: z.string().trim().max(500, 'a note is at most 500 characters').optional(),
+});
+export type ResolveConflictBody = z.infer<typeof resolveConflictBodySchema>;

@@ -124,6 +124,12 @@ export const ROUTES: RouteSpec[] = [
   { method: 'POST', path: '/api/clubs/:clubId/sync/pull', access: 'member', body: () => ({ type: 'pull', ...versions, cursor: '0', limit: 10 }) },
   { method: 'GET', path: '/api/clubs/:clubId/sync/rejected', access: 'member' },
   { method: 'GET', path: '/api/clubs/:clubId/sync/conflicts', access: 'member' },
+  // ---- sync problems (PROBLEMS helper): leads and admins settle conflicts; each person dismisses their own refusals ----
+  { method: 'POST', path: '/api/clubs/:clubId/sync/rejected/:rejectedId/dismiss', access: 'member', params: async () => ({ rejectedId: '987654321' }) },
+  {
+    method: 'POST', path: '/api/clubs/:clubId/sync/conflicts/:conflictId/resolve', access: 'plan.write', optional: ['note'],
+    params: async () => ({ conflictId: '987654321' }), body: () => ({ choice: 'other', note: 'Measured again with the clinometer.' }),
+  },
 
   // ---- notification settings (H7b): each member reads and sets their own ----
   { method: 'GET', path: '/api/clubs/:clubId/notification-settings', access: 'member' },

@@ -5,5 +5,6 @@ import { PhotoUploads1796163535135 } from './1796163535135-photo-uploads';
 import { SyncBookkeeping1796170000000 } from './1796170000000-sync-bookkeeping';
 import { Notifications1796180000000 } from './1796180000000-notifications';
 import { SpotLegsAndCrews1796190000000 } from './1796190000000-spot-legs-and-crews';
+import { SyncProblemResolution1796200000000 } from './1796200000000-sync-problem-resolution';
 
-export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135, SyncBookkeeping1796170000000, Notifications1796180000000, SpotLegsAndCrews1796190000000];
+export const MIGRATIONS = [InitialSchema1796163364737, PhotoUploads1796163535135, SyncBookkeeping1796170000000, Notifications1796180000000, SpotLegsAndCrews1796190000000, SyncProblemResolution1796200000000];

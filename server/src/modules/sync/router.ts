@@ -1,4 +1,5 @@
-// /api/clubs/:clubId/sync/…: push, pull, and the lists of refused changes and safety conflicts.
+// /api/clubs/:clubId/sync/…: push, pull, the lists of refused changes and safety conflicts, settling a conflict
+// (leads and admins: plan.write) and dismissing one's own refused change.
 // Every member may sync (reading a club's data needs only membership); each mutation is checked against the
 // member's role. A request from a newer or older app gets a typed "too old" answer, not an error.
 import { Router } from 'express';
@@ -9,17 +10,20 @@ import {
   checkVersions,
   pullRequestSchema,
   pushRequestSchema,
-  type ConflictEntry,
+  problemIdSchema,
+  resolveConflictBodySchema,
   type PullResponse,
   type PushResponse,
-  type RejectedEntry,
+  type ResolveConflictBody,
 } from '../../../../sync/protocol';
 import type { AppDeps } from '../../app-deps';
-import { requireMembership, requireUser } from '../../http/auth';
+import { requireAbility, requireMembership, requireUser } from '../../http/auth';
 import { AppError } from '../../http/errors';
+import { validate } from '../../http/validate';
 import { pullChanges } from './pull-service';
 import { applyPush } from './push-service';
 import { AFTER_APPLY_HOOKS } from './after-apply-hooks';
+import { SyncProblemsService } from './problems-service';
 
 const versionsOnly = z.object({ protocolVersion: z.number().int(), schemaVersion: z.number().int() });
 
@@ -31,12 +35,16 @@ function versionAnswer(body: unknown): { type: 'client-too-old' | 'server-too-ol
 }
 
 const listQuery = z.object({ limit: z.coerce.number().int().min(1).max(500).default(100), recordId: idSchema.optional() });
-const iso = (v: unknown) => new Date(String(v)).toISOString();
+/** ?open=true (the default) lists the conflicts nobody has settled; ?open=false lists them all. */
+const conflictsQuery = listQuery.extend({
+  open: z.enum(['true', 'false'], { message: "open must be 'true' or 'false'" }).default('true').transform((v) => v === 'true'),
+});
 
 export function syncRouter(deps: AppDeps): Router {
   const router = Router({ mergeParams: true });
   router.use(requireUser(deps), requireMembership(deps));
   const afterApply = AFTER_APPLY_HOOKS.map((hook) => hook(deps));
+  const problems = new SyncProblemsService(deps.dataSource);
 
   router.post('/push', async (req, res) => {
     const tooOld = versionAnswer(req.body);
@@ -59,50 +67,29 @@ export function syncRouter(deps: AppDeps): Router {
   router.get('/rejected', async (req, res) => {
     const q = listQuery.parse(req.query);
     const m = req.membership!;
-    const rows: Record<string, unknown>[] = await deps.dataSource.query(
-      `SELECT id, device_id, mutation_id, collection, record_id, op, fields, clock, code, message, details, created_at FROM sync_rejected
-       WHERE club_id = $1 AND user_id = $2 AND ($3::uuid IS NULL OR record_id = $3) ORDER BY id DESC LIMIT $4`,
-      [m.clubId, m.userId, q.recordId ?? null, q.limit],
-    );
-    const list: RejectedEntry[] = rows.map((r) => ({
-      id: String(r.id),
-      deviceId: String(r.device_id),
-      mutationId: Number(r.mutation_id),
-      collection: r.collection as RejectedEntry['collection'],
-      recordId: String(r.record_id),
-      op: r.op as RejectedEntry['op'],
-      fields: r.fields as Record<string, unknown>,
-      clock: String(r.clock),
-      code: r.code as RejectedEntry['code'],
-      message: String(r.message),
-      ...(r.details == null ? {} : { details: r.details }),
-      createdAt: iso(r.created_at),
-    }));
-    res.json(list);
+    res.json(await problems.listRejected(m.clubId, m.userId, q));
+  });
+
+  router.post('/rejected/:rejectedId/dismiss', validate({ params: z.object({ clubId: z.string(), rejectedId: problemIdSchema }) }), async (req, res) => {
+    const m = req.membership!;
+    await problems.dismissRejected(m.clubId, m.userId, String(req.params.rejectedId), deps.clock.now());
+    res.status(204).end();
   });
 
   router.get('/conflicts', async (req, res) => {
-    const q = listQuery.parse(req.query);
-    const rows: Record<string, unknown>[] = await deps.dataSource.query(
-      `SELECT id, collection, record_id, field, kept_value, kept_clock, kept_by, other_value, other_clock, other_by, created_at FROM sync_conflicts
-       WHERE club_id = $1 AND ($2::uuid IS NULL OR record_id = $2) ORDER BY id DESC LIMIT $3`,
-      [req.membership!.clubId, q.recordId ?? null, q.limit],
-    );
-    const list: ConflictEntry[] = rows.map((r) => ({
-      id: String(r.id),
-      collection: r.collection as ConflictEntry['collection'],
-      recordId: String(r.record_id),
-      field: String(r.field),
-      keptValue: r.kept_value,
-      keptClock: String(r.kept_clock),
-      keptBy: (r.kept_by as string | null) ?? null,
-      otherValue: r.other_value,
-      otherClock: String(r.other_clock),
-      otherBy: (r.other_by as string | null) ?? null,
-      createdAt: iso(r.created_at),
-    }));
-    res.json(list);
+    const q = conflictsQuery.parse(req.query);
+    res.json(await problems.listConflicts(req.membership!.clubId, q));
   });
+
+  router.post(
+    '/conflicts/:conflictId/resolve',
+    requireAbility('plan.write'),
+    validate({ params: z.object({ clubId: z.string(), conflictId: problemIdSchema }), body: resolveConflictBodySchema }),
+    async (req, res) => {
+      const m = req.membership!;
+      res.json(await problems.resolveConflict(m.clubId, String(req.params.conflictId), m.userId, req.body as ResolveConflictBody, deps.clock.now()));
+    },
+  );
 
   return router;
 }
