@@ -1,6 +1,7 @@
 // Every path of /api/auth/* and /api/me, against the contract in /tmp/briefs/contracts.md and shared/schemas.
 import jwt from 'jsonwebtoken';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { FORGOT_PASSWORD_MIN_MS } from '../../server/src/modules/auth/router';
 import { startTestApp, type TestApp } from './helpers/test-app';
 
 let offsetMs = 0;
@@ -155,6 +156,17 @@ describe('auth', () => {
       const r = await t.api('POST', '/api/auth/forgot-password', { body: { email: 'ghost@example.test' } });
       expect(r.status).toBe(202);
       expect(t.mailbox.messages.length).toBe(before);
+    });
+
+    it('forgot-password takes at least the same floor for a known and an unknown address (answer timing reveals no account; OWASP Forgot Password Cheat Sheet, from memory: consistent response time)', async () => {
+      const u = await t.signUpUser();
+      const timed = async (email: string) => {
+        const started = performance.now();
+        const r = await t.api('POST', '/api/auth/forgot-password', { body: { email } });
+        expect(r.status).toBe(202);
+        return performance.now() - started;
+      };
+      for (const ms of [await timed('nobody-here@example.test'), await timed(u.email)]) expect(ms).toBeGreaterThanOrEqual(FORGOT_PASSWORD_MIN_MS - 5);
     });
 
     it('the mailed link resets the password once; old password and other sessions stop working', async () => {

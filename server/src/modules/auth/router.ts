@@ -14,6 +14,9 @@ import { AppError } from '../../http/errors';
 import { validate } from '../../http/validate';
 import { AuthService } from './service';
 
+/** Shortest time a forgot-password answer takes, known address or not (well above the work a known one does). */
+export const FORGOT_PASSWORD_MIN_MS = 250;
+
 function emailKey(req: Request): string | null {
   const email = (req.body as { email?: unknown } | undefined)?.email;
   return typeof email === 'string' && email.trim() ? `email:${email.trim().toLowerCase()}` : null;
@@ -50,7 +53,12 @@ export function authRouter(deps: AppDeps): Router {
     res.status(204).end();
   });
   router.post('/auth/forgot-password', ...attemptLimits(deps, 'password reset', true), validate({ body: forgotPasswordSchema }), async (req, res) => {
+    // The same answer, after at least the same time, whether or not the address has an account (the known
+    // address's two writes take a few ms more): the answer's timing does not tell who is a member.
+    const started = Date.now();
     await auth.forgotPassword(req.body.email);
+    const left = FORGOT_PASSWORD_MIN_MS - (Date.now() - started);
+    if (left > 0) await new Promise((done) => setTimeout(done, left));
     res.status(202).json({ message: 'if an account has this e-mail, a reset link is on its way' });
   });
   router.post('/auth/reset-password', validate({ body: resetPasswordSchema }), async (req, res) => {
