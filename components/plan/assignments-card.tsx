@@ -7,6 +7,7 @@ import type { AntennaSpot, Station } from '@/shared/schemas';
 import type { SpotEvaluation } from '@/shared/review';
 import { ClearanceBadge, SpotStateBadge } from './spot-state-badge';
 import { withLabels } from './label-ids';
+import { spotLegsText } from './leg-text';
 
 type Props = {
   spots: SpotEvaluation[];
@@ -49,7 +50,7 @@ export function AssignmentsCard({ spots, stations, separations, plan, canPlan, o
               <SpotStateBadge state={s.review.state} testID={`assignment-state-${s.spot.id}`} />
               {s.evaluated ? <ClearanceBadge level={s.evaluated.candidate.level} /> : null}
             </View>
-            <Txt>{s.spot.shape === 'flat' ? `Flat-top between ${s.supportLabels.join(' and ')}` : `Inverted-V from ${s.supportLabels[0]}`}</Txt>
+            <Txt testID={`assignment-where-${s.spot.id}`}>{s.spot.shape === 'flat' ? `Flat-top between ${s.supportLabels.join(' and ')}` : `Inverted-V from ${s.supportLabels[0]}${spotLegsText(s)}`}</Txt>
             {s.review.reasons.map((r) => <Txt key={r} variant="caption" color={colors.danger}>{r}</Txt>)}
             <View style={styles.line}>
               <Button label="Open" variant="secondary" compact testID={`assignment-open-${s.spot.id}`} onPress={() => onOpen(s)} />

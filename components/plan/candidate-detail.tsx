@@ -12,6 +12,7 @@ import { ClearanceList } from './clearance-list';
 import { PatternPictures } from './pattern-pictures';
 import { ClearanceBadge } from './spot-state-badge';
 import { labelsOf, withLabels } from './label-ids';
+import { legEndOutM, legsText } from './leg-text';
 
 type Props = {
   records: SiteRecords;
@@ -36,6 +37,11 @@ export function CandidateDetail({ records, file, candidate: c, purpose, supportL
       <Txt variant="bodyStrong">{c.summary}</Txt>
       <Tabular>Score {c.score.toFixed(2)} · wire {formatLengthM(c.wireLengthM)} · feed {formatLengthM(c.feedHeightM)} high ({c.heightWavelengths.toFixed(2)} λ)</Tabular>
       <Tabular>Broadside {c.broadsideDeg.map((d) => `${d.toFixed(0)}°`).join(' and ')} · wire runs {c.wireAzimuthDeg.toFixed(0)}°{c.apexDeg ? ` · apex ${c.apexDeg}°` : ''}</Tabular>
+      {c.shape === 'inverted-v' ? (
+        <Tabular testID={`${testID}-legs`}>
+          Inverted-V {legsText(c.wireAzimuthDeg)} true from the apex · each leg end comes down {formatLengthM(legEndOutM(c))} out from the support, {formatLengthM(c.endHeightsM[0])} up
+        </Tabular>
+      ) : null}
       {c.explanation.map((l) => <Txt key={l} variant="caption">• {withLabels(l, labels)}</Txt>)}
       {c.coax ? (
         <Tabular>Coax run {formatLengthM(c.coax.runM)} to the operating position{c.coax.best ? ` · ${c.coax.best.type} ${formatLengthM(c.coax.best.lengthM)}${c.coax.best.totalDb !== null ? `, ${c.coax.best.totalDb.toFixed(1)} dB` : ''}` : ' · no piece in the inventory reaches'}</Tabular>

@@ -1,13 +1,14 @@
 import { useMemo, useState } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
-import { Button, Card, ErrorText, ListRow, Select, Txt } from '@/components/ui';
+import { Button, Card, ErrorText, ListRow, NumberField, Select, Txt } from '@/components/ui';
 import { colors, spacing } from '@/constants/theme';
 import type { PlanState } from '@/hooks/plan/use-plan-result';
-import { evaluateSpot, type Candidate } from '@/shared/plan';
+import { DEFAULT_PLAN_OPTIONS, evaluateSpot, type Candidate } from '@/shared/plan';
 import type { Station, Support } from '@/shared/schemas';
 import type { SiteFile } from '@/shared/schemas/site-file';
 import { filterCandidates, type CandidateFilter } from './candidate-filters';
 import { ClearanceBadge } from './spot-state-badge';
+import { legBearingFor, legChoices, legsText, type LegChoice } from './leg-text';
 
 type Props = {
   plan: PlanState;
@@ -28,6 +29,9 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
   const [handA, setHandA] = useState<string | null>(null);
   const [handB, setHandB] = useState<string | null>(null);
   const [handError, setHandError] = useState<string | null>(null);
+  const [handLegs, setHandLegs] = useState<LegChoice>('best');
+  const [handTyped, setHandTyped] = useState<number | null>(null);
+  const [legsError, setLegsError] = useState<string | null>(null);
   const chosen = needs.find((n) => n.need.key === needKey) ?? needs[0];
   const list = useMemo(() => (chosen ? filterCandidates(chosen.ranked, filter) : []), [chosen, filter]);
   const stationName = (id: string) => stations.find((s) => s.id === id)?.name ?? id;
@@ -36,7 +40,16 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
 
   const pickByHand = () => {
     if (!chosen || !handA || (handShape === 'flat' && (!handB || handB === handA))) return setHandError('Choose the support (two different supports for a flat-top).');
-    const e = evaluateSpot(file, { stationId: chosen.need.stationId, band: chosen.need.band, shape: handShape, supportIds: handShape === 'flat' ? [handA, handB!] : [handA] });
+    const legs = handShape === 'inverted-v' ? legBearingFor(handLegs, handTyped) : { bearingDeg: null, error: null };
+    setLegsError(legs.error);
+    if (legs.error) return setHandError(null);
+    const e = evaluateSpot(file, {
+      stationId: chosen.need.stationId,
+      band: chosen.need.band,
+      shape: handShape,
+      supportIds: handShape === 'flat' ? [handA, handB!] : [handA],
+      legAzimuthDeg: legs.bearingDeg,
+    });
     if (!e) return setHandError(`A ${chosen.need.band} ${handShape === 'flat' ? 'flat-top cannot span these supports (too close, too far, or the wire would hang too low)' : 'inverted-V cannot hang from this support (its ends would be too low)'}.`);
     setHandError(null);
     onOpen(e.candidate, false);
@@ -71,7 +84,7 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
         <View key={c.id} style={styles.row}>
           <View style={styles.flex}>
             <ListRow
-              title={`${i + 1}. ${c.shape === 'flat' ? `${label(c.supportIds[0])} – ${label(c.supportIds[1])}` : `Inverted-V at ${label(c.supportIds[0])}`}`}
+              title={`${i + 1}. ${c.shape === 'flat' ? `${label(c.supportIds[0])} – ${label(c.supportIds[1])}` : `Inverted-V at ${label(c.supportIds[0])}, ${legsText(c.wireAzimuthDeg)}`}`}
               subtitle={c.summary}
               testID={`candidate-${i}`}
               selected={openIds.includes(c.id)}
@@ -90,6 +103,14 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
         {handError ? <ErrorText message={handError} testID="hand-error" /> : null}
         <Button label="Check this spot" variant="secondary" testID="hand-check" onPress={pickByHand} />
       </View>
+        {handShape === 'inverted-v' ? (
+          <>
+            <Select label="Leg direction (bearings true from the apex)" testID="hand-legs" options={legChoices(DEFAULT_PLAN_OPTIONS.invertedVAzimuthsDeg)} value={handLegs} onChange={(v) => { setHandLegs(v); setLegsError(null); }} />
+            {handLegs === 'typed' ? (
+              <NumberField label="Leg bearing, 0 to 179.9° true (legs to 30° and 210°: type 30)" testID="hand-legs-typed" value={handTyped} onChange={(v) => { setHandTyped(v); setLegsError(null); }} error={legsError ?? undefined} />
+            ) : legsError ? <ErrorText message={legsError} testID="hand-legs-error" /> : null}
+          </>
+        ) : null}
     </Card>
   );
 }

@@ -6,6 +6,7 @@ import { SpotStateBadge } from '@/components/plan/spot-state-badge';
 import { colors, spacing } from '@/constants/theme';
 import { RoleNotice } from '@/components/plan/role-notice';
 import { labelsOf } from '@/components/plan/label-ids';
+import { spotLegsText } from '@/components/plan/leg-text';
 import { useMembers } from '@/hooks/api/use-members';
 import { useSession } from '@/hooks/auth/use-session';
 import { useEventRecords } from '@/hooks/plan/use-event-records';
@@ -61,7 +62,7 @@ export function ReviewScreen({ eventId }: { eventId: string }) {
           <Card
             key={s.spot.id}
             testID={`review-spot-${s.spot.stationId}-${s.spot.band}`}
-            title={`${stationName(s.spot.stationId)} · ${s.spot.band} · ${s.spot.shape === 'flat' ? s.supportLabels.join(' – ') : `inverted-V at ${s.supportLabels[0]}`}`}
+            title={`${stationName(s.spot.stationId)} · ${s.spot.band} · ${s.spot.shape === 'flat' ? s.supportLabels.join(' – ') : `inverted-V at ${s.supportLabels[0]}${spotLegsText(s)}`}`}
             right={<SpotStateBadge state={s.review.state} testID={`review-state-${s.spot.id}`} />}
           >
             {s.review.reasons.map((r) => <Txt key={r} color={colors.danger} testID={`review-reason-${s.spot.id}`}>{r}</Txt>)}

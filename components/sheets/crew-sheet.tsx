@@ -5,6 +5,7 @@ import { PhotoThumb } from '@/components/photos/photo-thumb';
 import { PhotoViewer } from '@/components/photos/photo-viewer';
 import { CautionsBox } from '@/components/plan/cautions-box';
 import { SpotStateBadge } from '@/components/plan/spot-state-badge';
+import { legBearingsDeg, legEndOutM } from '@/components/plan/leg-text';
 import { colors, spacing } from '@/constants/theme';
 import type { EventRecords } from '@/hooks/plan/use-event-records';
 import { useMutate } from '@/hooks/sync';
@@ -40,7 +41,12 @@ export function CrewSheet({ records, evaluation: s, canMark }: { records: EventR
       <Card title="Wire">
         <Tabular testID="sheet-wire">{c.shape === 'flat' ? 'Flat-top dipole' : `Inverted-V dipole, apex angle ${c.apexDeg}°`}: cut {formatLengthM(c.wireLengthM)} in all, two legs of {formatLengthM(legM)} from the centre insulator</Tabular>
         <Tabular>Feed point {formatLengthM(c.feedHeightM)} up · wire runs {c.wireAzimuthDeg.toFixed(0)}°/{(c.wireAzimuthDeg + 180).toFixed(0)}° · broadside {c.broadsideDeg.map((d) => `${d.toFixed(0)}°`).join(' and ')}</Tabular>
-        {c.ropeEachEndM !== null ? <Tabular testID="sheet-rope">Rope each end: {formatLengthM(c.ropeEachEndM)} from the end insulator to the support (span {formatLengthM(c.spanM)}, sag about {formatLengthM(c.sagM)})</Tabular> : <Tabular testID="sheet-rope">Leg ends about {formatLengthM(c.endHeightsM[0])} up: tie off with rope to stakes outside the keep-out circle</Tabular>}
+        {c.ropeEachEndM !== null ? <Tabular testID="sheet-rope">Rope each end: {formatLengthM(c.ropeEachEndM)} from the end insulator to the support (span {formatLengthM(c.spanM)}, sag about {formatLengthM(c.sagM)})</Tabular> : (
+          <>
+            <Tabular testID="sheet-legs">Run one leg toward {legBearingsDeg(c.wireAzimuthDeg)[0]} and the other toward {legBearingsDeg(c.wireAzimuthDeg)[1]} (true, from the apex): each leg end comes down {formatLengthM(legEndOutM(c))} out from the foot of {records.supports.find((x) => x.id === s.spot.supportIds[0])?.label ?? 'the support'}{s.spot.legAzimuthDeg === null ? ' (the direction the engine found best; the lead chose none)' : ''}</Tabular>
+            <Tabular testID="sheet-rope">Leg ends about {formatLengthM(c.endHeightsM[0])} up: tie off with rope to stakes outside the keep-out circle</Tabular>
+          </>
+        )}
         <Txt variant="caption">Trim for the lowest SWR at the operating frequency; the cut is a starting length.</Txt>
       </Card>
       <Card title="Supports">

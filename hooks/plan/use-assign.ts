@@ -2,25 +2,9 @@ import { useCallback } from 'react';
 import { useMutate } from '@/hooks/sync';
 import type { Candidate, PlanResult } from '@/shared/plan';
 import type { AntennaSpot } from '@/shared/schemas';
+import { sameSpot, spotFieldsFor } from './spot-fields';
 
-/** The antenna-spot fields for putting a station's band on a candidate (back to "planned": it must be reviewed). */
-export function spotFieldsFor(c: Candidate, eventId: string, reason: string) {
-  return {
-    eventId,
-    stationId: c.stationId,
-    band: c.band,
-    shape: c.shape,
-    supportIds: [...c.supportIds],
-    coaxId: c.coax?.best?.pieceIds[0] ?? null,
-    operatingPositionId: c.coax?.operatingPositionId ?? null,
-    state: 'planned' as const,
-    stateReason: reason,
-    inputsFingerprint: '',
-    measuredSwr: null,
-  };
-}
-
-const sameSpot = (s: AntennaSpot, c: Candidate) => s.shape === c.shape && s.supportIds.join('~') === c.supportIds.join('~');
+export { spotFieldsFor } from './spot-fields';
 
 /** Assign by hand, move an assignment, or take the engine's assignment for every station. */
 export function useAssign(eventId: string, spots: readonly AntennaSpot[]) {

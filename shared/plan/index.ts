@@ -7,6 +7,7 @@ export type { PlanResult, PlanSiteOptions, AntennaPlan, ChosenSpot } from './pla
 export type { Candidate } from './evaluate';
 export { evaluateSpot } from './evaluate-spot';
 export type { SpotToEvaluate, EvaluatedSpot } from './evaluate-spot';
+export { legEndOffsetM, foldBearingDeg } from './candidates';
 export { DEFAULT_PLAN_OPTIONS, resolvePlanOptions } from './options';
 export type { PlanOptions, PlanOptionsInput } from './options';
 export { PlanInputError, DEFAULT_PURPOSE_BY_BAND } from './site-model';
