@@ -4,6 +4,7 @@
 // station keeps the crew it had. Common practice of this project: refusals are rejected mutations, never lost silently.
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { seedDemo } from '../../server/src/dev/seed-demo';
 import { startTestApp, type TestApp, type TestUser } from './helpers/test-app';
 import { device, eventRecords, push, type Device, type EventIds } from './notifications-fixtures';
 
@@ -83,5 +84,22 @@ describe('a station’s crew must be members of its club', () => {
     const answer = await push(app, clubId, leadPhone, [setCrew(ids.stationId, [])], nowMs + 7000);
     expect(answer.rejected).toEqual([]);
     expect(await crewOf(ids.stationId)).toEqual([]);
+  });
+});
+
+describe('the demo names a crew on one station and none on the other (both sheet-mail paths show)', () => {
+  it('Station 2 (high bands) names crew@kestrel.test; Station 1 (low bands) names no one', async () => {
+    const t = await startTestApp();
+    try {
+      const { eventId } = await seedDemo(t.deps);
+      const rows: { name: string; crew: string[] }[] = await t.deps.dataSource.query('SELECT name, crew_member_ids AS crew FROM stations WHERE event_id = $1 ORDER BY name', [eventId]);
+      const [crewUser]: { id: string }[] = await t.deps.dataSource.query("SELECT id FROM users WHERE email = 'crew@kestrel.test'");
+      expect(rows).toEqual([
+        { name: 'Station 1 (low bands)', crew: [] },
+        { name: 'Station 2 (high bands)', crew: [crewUser.id] },
+      ]);
+    } finally {
+      await t.close();
+    }
   });
 });

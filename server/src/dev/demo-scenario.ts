@@ -100,9 +100,13 @@ export const DEMO_POSITIONS: { key: string; at: Offset; fields: Omit<CollectionF
   { key: 'op2', at: { e: 24, n: -14 }, fields: { label: 'Canopy B', notes: 'Shares the battery bank with Canopy A' } },
 ];
 
-export const DEMO_STATIONS: { key: string; fields: Omit<CollectionFields<'stations'>, 'eventId'> }[] = [
-  { key: 's1', fields: { name: 'Station 1 (low bands)', bands: ['80m', '40m'], mode: 'ssb', powerW: 100, purpose: 'regional', crewMemberIds: [], notes: '' } },
-  { key: 's2', fields: { name: 'Station 2 (high bands)', bands: ['20m', '15m', '10m'], mode: 'cw', powerW: 100, purpose: 'long-distance', crewMemberIds: [], notes: '' } },
+/**
+ * The crew of each station by e-mail (seed-demo turns them into user ids): Station 2 names the demo crew member, and
+ * Station 1 names no one, so the demo shows both ways a "sheet ready" e-mail goes out (own crew; every crew member).
+ */
+export const DEMO_STATIONS: { key: string; crewEmails: string[]; fields: Omit<CollectionFields<'stations'>, 'eventId' | 'crewMemberIds'> }[] = [
+  { key: 's1', crewEmails: [], fields: { name: 'Station 1 (low bands)', bands: ['80m', '40m'], mode: 'ssb', powerW: 100, purpose: 'regional', notes: '' } },
+  { key: 's2', crewEmails: ['crew@kestrel.test'], fields: { name: 'Station 2 (high bands)', bands: ['20m', '15m', '10m'], mode: 'cw', powerW: 100, purpose: 'long-distance', notes: '' } },
 ];
 
 export const DEMO_COAX: { key: string; fields: CollectionFields<'coax'> }[] = [

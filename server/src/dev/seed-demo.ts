@@ -108,7 +108,12 @@ export async function seedDemo(deps: AppDeps): Promise<SeedResult> {
       created = (await ensureRecord(deps, em, 'operatingPositions', club, demoId(`position/${p.key}`), { ...p.fields, siteId, ...offsetToLatLon(p.at) })) || created;
     }
     for (const s of DEMO_STATIONS) {
-      created = (await ensureRecord(deps, em, 'stations', club, demoId(`station/${s.key}`), { ...s.fields, eventId })) || created;
+      const crewMemberIds = s.crewEmails.map((email) => {
+        const id = userIds.get(email);
+        if (!id) throw new Error(`demo station ${s.key} names ${email} as crew, who is not a demo user`);
+        return id;
+      });
+      created = (await ensureRecord(deps, em, 'stations', club, demoId(`station/${s.key}`), { ...s.fields, crewMemberIds, eventId })) || created;
     }
     for (const c of DEMO_COAX) {
       created = (await ensureRecord(deps, em, 'coax', club, demoId(`coax/${c.key}`), c.fields)) || created;
