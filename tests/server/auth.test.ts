@@ -142,6 +142,33 @@ describe('auth', () => {
       const r = await t.api('POST', '/api/auth/refresh', { body: { refreshToken: u.tokens.refreshToken } });
       expect(r.status).toBe(401);
     });
+
+    it('signing out ends the session at once: its access token is refused, another session of the person keeps working', async () => {
+      const u = await t.signUpUser();
+      const other = await t.api('POST', '/api/auth/sign-in', { body: { email: u.email, password: u.password } });
+      expect((await t.api('GET', '/api/me', { auth: u.tokens.accessToken })).status).toBe(200);
+      await t.api('POST', '/api/auth/sign-out', { body: { refreshToken: u.tokens.refreshToken } });
+      const after = await t.api('GET', '/api/me', { auth: u.tokens.accessToken });
+      expect(after.status).toBe(401);
+      expect(after.body.code).toBe('session_ended');
+      expect((await t.api('GET', '/api/me', { auth: other.body.accessToken })).status).toBe(200);
+    });
+
+    it('a replayed refresh token closes the family, and the access tokens issued in it stop working too', async () => {
+      const u = await t.signUpUser();
+      const next = await t.api('POST', '/api/auth/refresh', { body: { refreshToken: u.tokens.refreshToken } });
+      expect((await t.api('GET', '/api/me', { auth: next.body.accessToken })).status).toBe(200);
+      await t.api('POST', '/api/auth/refresh', { body: { refreshToken: u.tokens.refreshToken } });
+      expect((await t.api('GET', '/api/me', { auth: next.body.accessToken })).body.code).toBe('session_ended');
+    });
+
+    it('an access token that names no session (right secret, old format) is refused', async () => {
+      const u = await t.signUpUser();
+      const noSession = jwt.sign({ sub: u.id, typ: 'access' }, t.deps.config.jwtSecret, { algorithm: 'HS256', issuer: 'loftline', audience: 'loftline-api', expiresIn: 900 });
+      const r = await t.api('GET', '/api/me', { auth: noSession });
+      expect(r.status).toBe(401);
+      expect(r.body.code).toBe('token_invalid');
+    });
   });
 
   describe('password reset', () => {
@@ -178,6 +205,7 @@ describe('auth', () => {
       expect((await t.api('POST', '/api/auth/sign-in', { body: { email: u.email, password: u.password } })).status).toBe(401);
       expect((await t.api('POST', '/api/auth/sign-in', { body: { email: u.email, password: 'a brand new secret' } })).status).toBe(200);
       expect((await t.api('POST', '/api/auth/refresh', { body: { refreshToken: u.tokens.refreshToken } })).status).toBe(401);
+      expect((await t.api('GET', '/api/me', { auth: u.tokens.accessToken })).body.code).toBe('session_ended');
       const again = await t.api('POST', '/api/auth/reset-password', { body: { token, password: 'yet another secret' } });
       expect(again.status).toBe(410);
       expect(again.body.code).toBe('reset_used');

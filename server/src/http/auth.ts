@@ -5,7 +5,8 @@ import { Passport } from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import { can, idSchema, type Ability, type Role } from '../../../shared/schemas';
 import type { AppDeps } from '../app-deps';
-import { MembershipEntity, UserEntity } from '../db/entities';
+import { IsNull } from 'typeorm';
+import { MembershipEntity, RefreshTokenEntity, UserEntity } from '../db/entities';
 import { AppError } from './errors';
 import { ACCESS_TOKEN_AUDIENCE, ACCESS_TOKEN_ISSUER, type AccessTokenPayload } from './access-token';
 
@@ -37,6 +38,9 @@ export interface AuthGuards {
   requireMembership: RequestHandler;
 }
 
+const ACCOUNT_GONE = 'account no longer exists';
+const SESSION_ENDED = 'session ended';
+
 const guardsByDeps = new WeakMap<AppDeps, AuthGuards>();
 
 function explainJwtFailure(info: unknown): AppError {
@@ -64,17 +68,20 @@ export function authGuards(deps: AppDeps): AuthGuards {
         audience: ACCESS_TOKEN_AUDIENCE,
       },
       (payload: AccessTokenPayload, done: (err: unknown, user?: AuthUser | false, info?: unknown) => void) => {
-        if (payload.typ !== 'access' || !idSchema.safeParse(payload.sub).success) {
+        if (payload.typ !== 'access' || !idSchema.safeParse(payload.sub).success || !idSchema.safeParse(payload.sid).success) {
           done(null, false, new Error('not an access token'));
           return;
         }
-        deps.dataSource
-          .getRepository(UserEntity)
-          .findOneBy({ id: payload.sub })
-          .then((u) => {
-            if (!u) done(null, false, new Error('account no longer exists'));
-            else done(null, { id: u.id, email: u.email, displayName: u.displayName, callSign: u.callSign });
-          }, done);
+        // The session must still be open: a sign-out, a password reset or a reused refresh token revokes every
+        // refresh token of the family, and its access tokens stop working at once rather than up to 15 min later.
+        Promise.all([
+          deps.dataSource.getRepository(UserEntity).findOneBy({ id: payload.sub }),
+          deps.dataSource.getRepository(RefreshTokenEntity).existsBy({ familyId: payload.sid, userId: payload.sub, revokedAt: IsNull() }),
+        ]).then(([u, open]) => {
+          if (!u) done(null, false, new Error(ACCOUNT_GONE));
+          else if (!open) done(null, false, new Error(SESSION_ENDED));
+          else done(null, { id: u.id, email: u.email, displayName: u.displayName, callSign: u.callSign });
+        }, done);
       },
     ),
   );
@@ -83,8 +90,11 @@ export function authGuards(deps: AppDeps): AuthGuards {
     passport.authenticate('jwt', { session: false }, (err: unknown, user: AuthUser | false, info: unknown) => {
       if (err) return next(err);
       if (!user) {
-        if (info instanceof Error && info.message === 'account no longer exists') {
+        if (info instanceof Error && info.message === ACCOUNT_GONE) {
           return next(new AppError('token_invalid', 'unauthenticated', 'this account no longer exists'));
+        }
+        if (info instanceof Error && info.message === SESSION_ENDED) {
+          return next(new AppError('session_ended', 'unauthenticated', 'this session was signed out (or its password was reset): sign in again'));
         }
         return next(explainJwtFailure(info));
       }

@@ -56,7 +56,7 @@ export class AuthService {
       tokenHash: hashToken(refreshToken),
       expiresAt: new Date(this.now().getTime() + refreshTokenTtlS * 1000),
     });
-    return { accessToken: signAccessToken(user.id, jwtSecret, accessTokenTtlS, this.deps.clock), refreshToken, expiresIn: accessTokenTtlS, user };
+    return { accessToken: signAccessToken(user.id, familyId, jwtSecret, accessTokenTtlS, this.deps.clock), refreshToken, expiresIn: accessTokenTtlS, user };
   }
 
   async signUp(input: SignUpInput): Promise<Tokens> {
