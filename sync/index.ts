@@ -9,3 +9,5 @@ export { openIdbStore, idbDatabaseName } from './store/idb-store';
 export { createMemoryStore, MemoryDatabase } from './store/memory-store';
 export { StorageFullError, type LocalStore, type LocalRejection, type RecordSyncState } from './store/types';
 export { PROTOCOL_VERSION, SCHEMA_VERSION } from './protocol';
+// The sync-problems screen: entries of GET …/sync/conflicts and …/sync/rejected, and the clock's wall time.
+export { conflictEntrySchema, rejectedEntrySchema, decodeHlc, type ConflictEntry, type RejectedEntry, type ResolveConflictBody } from './protocol';

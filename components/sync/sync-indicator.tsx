@@ -1,3 +1,4 @@
+import { useRouter } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Icon, Txt } from '@/components/ui';
@@ -23,6 +24,7 @@ export function SyncIndicator() {
   const status = useSyncStatus();
   const { client } = useSyncContext();
   const [open, setOpen] = useState(false);
+  const router = useRouter();
   const [nowMs, setNowMs] = useState(() => Date.now());
   useEffect(() => {
     const t = setInterval(() => setNowMs(Date.now()), 30_000);
@@ -58,6 +60,21 @@ export function SyncIndicator() {
               {w}
             </Txt>
           ))}
+          {/* Refused changes and values recorded twice are read and settled on their own screen. */}
+          <Txt
+            variant="caption"
+            color={colors.action}
+            accessibilityRole="link"
+            accessibilityLabel="Open changes to check: refused changes and values recorded twice"
+            testID="sync-indicator-problems-link"
+            style={styles.link}
+            onPress={() => {
+              setOpen(false);
+              router.navigate('/sync-problems');
+            }}
+          >
+            {status.rejectedCount > 0 ? 'See the refused changes' : 'Changes to check'} ›
+          </Txt>
         </View>
       ) : null}
     </View>
@@ -78,6 +95,7 @@ const styles = StyleSheet.create({
     borderWidth: 1.5,
   },
   headline: { fontSize: 14, fontWeight: '600' },
+  link: { textDecorationLine: 'underline', paddingVertical: spacing.xs },
   details: {
     marginTop: spacing.xs,
     padding: spacing.m,

@@ -1,0 +1,3 @@
+import { SyncProblemsScreen } from '@/components/sync-problems/sync-problems-screen';
+
+export default SyncProblemsScreen;
