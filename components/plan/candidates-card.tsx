@@ -100,9 +100,6 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
         <Select label="Shape" testID="hand-shape" options={[{ value: 'flat', label: 'Flat-top (two supports)' }, { value: 'inverted-v', label: 'Inverted-V (one support)' }] as const} value={handShape} onChange={setHandShape} />
         <Select label={handShape === 'flat' ? 'First support' : 'Support'} testID="hand-a" options={planned.map((s) => ({ value: s.id, label: s.label }))} value={handA} onChange={setHandA} />
         {handShape === 'flat' ? <Select label="Second support" testID="hand-b" options={planned.map((s) => ({ value: s.id, label: s.label }))} value={handB} onChange={setHandB} /> : null}
-        {handError ? <ErrorText message={handError} testID="hand-error" /> : null}
-        <Button label="Check this spot" variant="secondary" testID="hand-check" onPress={pickByHand} />
-      </View>
         {handShape === 'inverted-v' ? (
           <>
             <Select label="Leg direction (bearings true from the apex)" testID="hand-legs" options={legChoices(DEFAULT_PLAN_OPTIONS.invertedVAzimuthsDeg)} value={handLegs} onChange={(v) => { setHandLegs(v); setLegsError(null); }} />
@@ -111,6 +108,9 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
             ) : legsError ? <ErrorText message={legsError} testID="hand-legs-error" /> : null}
           </>
         ) : null}
+        {handError ? <ErrorText message={handError} testID="hand-error" /> : null}
+        <Button label="Check this spot" variant="secondary" testID="hand-check" onPress={pickByHand} />
+      </View>
     </Card>
   );
 }
