@@ -81,18 +81,19 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
       {chosen ? <Txt variant="caption" color={colors.inkMuted}>{chosen.usableCount} usable of {chosen.candidateCount} possible spots; {chosen.blockedCount} blocked{chosen.blockedBy.length ? ` (by ${chosen.blockedBy.map((b) => b.key).join(', ')})` : ''}.</Txt> : null}
       {list.length === 0 ? <Txt testID="candidates-none">No candidate passes these filters.</Txt> : null}
       {list.map((c, i) => (
-        <View key={c.id} style={styles.row}>
-          <View style={styles.flex}>
-            <ListRow
-              title={`${i + 1}. ${c.shape === 'flat' ? `${label(c.supportIds[0])} – ${label(c.supportIds[1])}` : `Inverted-V at ${label(c.supportIds[0])}, ${legsText(c.wireAzimuthDeg)}`}`}
-              subtitle={c.summary}
-              testID={`candidate-${i}`}
-              selected={openIds.includes(c.id)}
-              onPress={() => onOpen(c, false)}
-              right={<ClearanceBadge level={c.level} />}
-            />
+        <View key={c.id}>
+          <ListRow
+            title={`${i + 1}. ${c.shape === 'flat' ? `${label(c.supportIds[0])} – ${label(c.supportIds[1])}` : `Inverted-V at ${label(c.supportIds[0])}, ${legsText(c.wireAzimuthDeg)}`}`}
+            subtitle={c.summary}
+            testID={`candidate-${i}`}
+            selected={openIds.includes(c.id)}
+            onPress={() => onOpen(c, false)}
+          />
+          {/* The badge and the compare button sit under the row, so its title and summary keep the full width. */}
+          <View style={styles.rowFoot}>
+            <ClearanceBadge level={c.level} testID={`candidate-level-${i}`} />
+            {isWide ? <Button label={openIds.includes(c.id) ? 'Shown' : 'Compare'} variant="secondary" compact testID={`candidate-compare-${i}`} onPress={() => onOpen(c, true)} /> : null}
           </View>
-          {isWide ? <Button label={openIds.includes(c.id) ? 'Shown' : 'Compare'} variant="secondary" compact testID={`candidate-compare-${i}`} onPress={() => onOpen(c, true)} /> : null}
         </View>
       ))}
       <View style={styles.hand} testID="candidates-by-hand">
@@ -117,7 +118,6 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
 
 const styles = StyleSheet.create({
   line: { flexDirection: 'row', alignItems: 'center', gap: spacing.s },
-  row: { flexDirection: 'row', alignItems: 'center', gap: spacing.s },
-  flex: { flex: 1 },
+  rowFoot: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: spacing.s, paddingHorizontal: spacing.m, paddingVertical: spacing.xs },
   hand: { marginTop: spacing.l, gap: spacing.s },
 });
