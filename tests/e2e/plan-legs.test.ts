@@ -2,8 +2,8 @@
 // event (created by REST on the demo site, one 20 m station pushed by the lead's second device; all removed at the
 // end): the lead hand-picks the Big bur oak with legs typed at 30° (a bearing the engine never offers, so never its
 // best) after a refused 200°, assigns it, and the server's antenna spot holds legAzimuthDeg 30; the spot is sent for
-// review from the phone, the safety officer accepts it as judged at 30°, and the crew's sheet says to run the legs
-// toward 30° and 210°; moving to the 90° direction of the same oak re-plans the spot at 90°.
+// review from the phone, the safety officer's queue names its legs, the acceptance is judged at 30°, and the crew's
+// sheet says to run the legs toward 30° and 210°; moving to the 90° direction of the same oak re-plans the spot at 90°.
 import { randomUUID } from 'node:crypto';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -133,6 +133,14 @@ describe('an inverted-V keeps the leg direction the lead chose', { timeout: 300_
     expect(await byTestId(lp.page, 'plan-candidate-0-legs').textContent()).toContain('legs run 30° – 210°');
     await screenshot(lp.page, 'plan-legs-open', 'phone');
     expect(lp.errors).toEqual([]);
+
+    // The safety officer's queue names the legs of the wire being judged.
+    const sp = await openAs('safety', 'phone', `/events/${eventId}/review`);
+    const card = byTestId(sp.page, `review-spot-${stationId}-20m`);
+    await card.waitFor({ timeout: 120_000 });
+    expect(await card.textContent()).toContain(`Legs ${tag} · 20m · inverted-V at Big bur oak, legs run 30° – 210°`);
+    await screenshot(sp.page, 'plan-legs-review', 'phone');
+    expect(sp.errors).toEqual([]);
 
     const [e] = await eventReviewOnServer(lead.token, clubId, eventId);
     expect(e.evaluated!.candidate.wireAzimuthDeg).toBe(30);
