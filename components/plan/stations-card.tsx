@@ -1,21 +1,21 @@
 import { useState } from 'react';
 import { View } from 'react-native';
-import { Button, Card, ListRow, Txt } from '@/components/ui';
+import { Badge, Button, Card, ListRow, Txt } from '@/components/ui';
+import { SYNC_STATE_LOOK } from '@/constants/states';
 import { colors, spacing } from '@/constants/theme';
-import { useMemberRoster, type MemberRoster } from '@/hooks/plan/use-member-roster';
+import { crewWords } from '@/hooks/plan/crew-words';
+import { useMemberRoster } from '@/hooks/plan/use-member-roster';
+import { useRecordSyncState } from '@/hooks/sync';
 import { useCurrentClub } from '@/hooks/use-current-club';
 import { useUnits } from '@/hooks/use-units';
 import type { Coax, Station } from '@/shared/schemas';
 import { CoaxForm } from './coax-form';
 import { StationForm } from './station-form';
 
-/** Who crews a station, in words: the named people (from the member list this device has), or that none is named. */
-export function crewWords(station: Pick<Station, 'crewMemberIds'>, roster: MemberRoster): string {
-  const ids = station.crewMemberIds;
-  if (ids.length === 0) return 'Crew: none named (every crew member gets its sheets)';
-  const names = ids.map((id) => roster.members?.find((m) => m.userId === id)?.displayName).filter((n): n is string => !!n);
-  const unknown = ids.length - names.length;
-  return `Crew: ${[...names, ...(unknown > 0 ? [unknown === ids.length ? `${unknown} named` : `${unknown} more`] : [])].join(', ')}`;
+/** A station change the server refused (e.g. a crew naming someone outside the club) says so on its row. */
+function StationRefused({ id }: { id: string }) {
+  if (useRecordSyncState('stations', id) !== 'rejected') return null;
+  return <Badge look={SYNC_STATE_LOOK.rejected} label="Not accepted: see Changes to check" testID={`station-refused-${id}`} />;
 }
 
 /** The event's stations and the club's coax, with forms to add and change them (lead and admin). */
@@ -36,11 +36,12 @@ export function StationsCard({ eventId, stations, coax, canPlan }: { eventId: st
           <ListRow
             key={s.id}
             title={s.name}
-            subtitle={`${s.bands.join(', ')} · ${s.mode.toUpperCase()} · ${s.powerW} W · ${s.purpose}\n${crewWords(s, roster)}`}
+            subtitle={`${s.bands.join(', ')} · ${s.mode.toUpperCase()} · ${s.powerW} W · ${s.purpose}\n${crewWords(s, roster.members)}`}
             icon="drafting"
             testID={`station-${s.id}`}
             onPress={canPlan ? () => setEditing(s) : undefined}
-            accessibilityLabel={`Station ${s.name}, bands ${s.bands.join(', ')}, ${crewWords(s, roster)}${canPlan ? ', tap to change' : ''}`}
+            accessibilityLabel={`Station ${s.name}, bands ${s.bands.join(', ')}, ${crewWords(s, roster.members)}${canPlan ? ', tap to change' : ''}`}
+            right={<StationRefused id={s.id} />}
           />
         ))}
       </Card>

@@ -2,6 +2,7 @@ import { useEffect, useMemo } from 'react';
 import { z } from 'zod';
 import { useMembers } from '@/hooks/api/use-members';
 import { readSetting, writeSetting } from '@/hooks/local-setting';
+import { crewFirst } from './crew-words';
 import { memberSchema, type Member } from '@/shared/schemas';
 
 /*
@@ -32,10 +33,6 @@ function readCache(clubId: string | undefined): { savedAt: string; members: Memb
   } catch {
     return null;
   }
-}
-
-export function crewFirst(members: readonly Member[]): Member[] {
-  return [...members].sort((a, b) => Number(b.role === 'crew') - Number(a.role === 'crew') || a.displayName.localeCompare(b.displayName) || a.email.localeCompare(b.email));
 }
 
 export function useMemberRoster(clubId: string | undefined): MemberRoster {

@@ -7,14 +7,12 @@
 import { randomUUID } from 'node:crypto';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { evaluateEventSpots, type SiteRecords } from '../../shared/review';
-import type { AntennaSpot } from '../../shared/schemas';
-import { PROTOCOL_VERSION, SCHEMA_VERSION, encodeHlc } from '../../sync/protocol';
-import { api, apiSignIn, pullAll, until, type PulledRecord } from './helpers/api';
+import { api, apiSignIn, pullAll, until } from './helpers/api';
 import { browserForFile, byTestId, newPage, screenshot, type ViewportName } from './helpers/browser';
 import { DEMO_PASSWORD, DEMO_USERS } from './helpers/demo-users';
 import { waitForMail } from './helpers/mailbox';
 import { baseUrl, signIn } from './helpers/session';
+import { eventReviewOnServer, liveOf as live, pushFrom, type Change } from './helpers/sync-push';
 
 const browser = browserForFile(beforeAll, afterAll);
 const tag = randomUUID().slice(0, 6);
@@ -27,22 +25,8 @@ let safety: { token: string; userId: string };
 let crewUserId: string;
 const contexts: BrowserContext[] = [];
 
-type Change = { collection: string; recordId: string; op?: 'upsert' | 'delete'; fields?: Record<string, unknown> };
-const devices = new Map<string, { id: string; next: number }>();
-
 /** Pushes changes from a second device of the person holding `token` (as a phone's sync would). */
-async function pushAs(token: string, changes: Change[]): Promise<{ code: string; message: string }[]> {
-  const d = devices.get(token) ?? { id: `e2e-crew-${randomUUID().slice(0, 8)}`, next: 1 };
-  devices.set(token, d);
-  const now = Date.now();
-  const mutations = changes.map((c) => {
-    const mutationId = d.next++;
-    return { mutationId, collection: c.collection, recordId: c.recordId, op: c.op ?? 'upsert', fields: c.fields ?? {}, baseClocks: {}, clock: encodeHlc({ wallMs: now, counter: mutationId, node: d.id }) };
-  });
-  const r = await api<{ rejected: { code: string; message: string }[] }>(`/api/clubs/${clubId}/sync/push`, { token, json: { type: 'push', protocolVersion: PROTOCOL_VERSION, schemaVersion: SCHEMA_VERSION, deviceId: d.id, mutations } });
-  expect(r.status).toBe(200);
-  return r.body.rejected;
-}
+const pushAs = (token: string, changes: Change[]) => pushFrom(token, clubId, changes);
 
 async function signInWithId(email: string) {
   const { token } = await apiSignIn(email, DEMO_PASSWORD);
@@ -50,8 +34,6 @@ async function signInWithId(email: string) {
   return { token, userId: me.body.user.id };
 }
 
-const live = (all: PulledRecord[], collection: string) => all.filter((r) => r.collection === collection && r.deletedAt === null);
-const asRecord = (r: PulledRecord) => ({ ...r.fields, id: r.id, clubId, deletedAt: r.deletedAt, createdAt: '', updatedAt: '' });
 
 async function openAs(role: keyof typeof DEMO_USERS, viewport: ViewportName): Promise<{ page: Page; context: BrowserContext; errors: string[] }> {
   const p = await newPage(browser(), viewport);
@@ -149,20 +131,7 @@ describe('crews assigned to stations', { timeout: 300_000 }, () => {
     expect(await pushAs(lead.token, [spot(ids.lowSpot, ids.low, '40m', supportOf('Big bur oak')), spot(ids.highSpot, ids.high, '20m', supportOf('Creek sycamore'))])).toEqual([]);
 
     // The safety officer accepts every result of both spots, judged by the same shared review the app and server use.
-    const now = await pullAll(lead.token, clubId);
-    const event = live(now, 'events').find((e) => e.id === eventId)!;
-    const siteId = event.fields.siteId;
-    const bySite = (c: string) => live(now, c).filter((r) => r.fields.siteId === siteId).map(asRecord);
-    const records = {
-      site: asRecord(live(now, 'sites').find((s) => s.id === siteId)!),
-      supports: bySite('supports'),
-      hazards: bySite('hazards'),
-      operatingPositions: bySite('operatingPositions'),
-      stations: live(now, 'stations').filter((s) => s.fields.eventId === eventId).map(asRecord),
-      coax: live(now, 'coax').map(asRecord),
-    } as unknown as SiteRecords;
-    const spots = live(now, 'antennaSpots').filter((s) => s.fields.eventId === eventId).map(asRecord) as unknown as AntennaSpot[];
-    const evaluated = evaluateEventSpots(records, spots, []).spots;
+    const evaluated = await eventReviewOnServer(lead.token, clubId, eventId);
     expect(evaluated).toHaveLength(2);
     const decisions: Change[] = [];
     for (const e of evaluated) {
