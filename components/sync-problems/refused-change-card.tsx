@@ -4,7 +4,7 @@ import { Button, Card, ErrorText, Icon, Txt } from '@/components/ui';
 import { colors, spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api/client';
 import { useDismissRefusedChange } from '@/hooks/api/use-sync-problems';
-import { useRecord } from '@/hooks/sync';
+import { useRecord, useSyncContext } from '@/hooks/sync';
 import { useUnits } from '@/hooks/use-units';
 import type { RejectedEntry } from '@/sync';
 import { clockWords, recordWords, refusedWords, sentenceCase } from './problem-text';
@@ -23,7 +23,11 @@ type Props = { entry: RejectedEntry; clubId: string; nowMs: number };
 export function RefusedChangeCard({ entry: r, clubId, nowMs }: Props) {
   const record = (useRecord(r.collection, r.recordId, { includeDeleted: true }) ?? null) as Record<string, unknown> | null;
   const { formatLengthM } = useUnits();
-  const dismiss = useDismissRefusedChange(clubId);
+  const { client } = useSyncContext();
+  // A refusal of this device's own change is also kept on the device (the indicator warns of it): forget it too.
+  const dismiss = useDismissRefusedChange(clubId, async (e) => {
+    if (client && e.deviceId === client.deviceId) await client.dismissRejection(e.mutationId);
+  });
   const [error, setError] = useState<string | null>(null);
   const what = refusedWords({ collection: r.collection, op: r.op, record: recordWords(r.collection, record, r.fields), fields: r.fields, formatLengthM });
   const testID = `refused-${r.id}`;
@@ -53,7 +57,7 @@ export function RefusedChangeCard({ entry: r, clubId, nowMs }: Props) {
           busy={dismiss.isPending}
           onPress={() => {
             setError(null);
-            dismiss.mutate(r.id, { onError: (err) => setError(errorMessage(err)) });
+            dismiss.mutate(r, { onError: (err) => setError(errorMessage(err)) });
           }}
         />
       </View>

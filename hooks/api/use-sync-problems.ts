@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { conflictEntrySchema, rejectedEntrySchema, type ResolveConflictBody } from '@/sync';
+import { conflictEntrySchema, rejectedEntrySchema, type RejectedEntry, type ResolveConflictBody } from '@/sync';
 import { apiFetch } from './client';
 
 /*
@@ -39,10 +39,17 @@ export function useResolveConflict(clubId: string) {
   });
 }
 
-export function useDismissRefusedChange(clubId: string) {
+/**
+ * Dismisses a refused change on the server; `forgetHere` then runs (the card passes the sync client's own
+ * dismissal when the change came from this device, so the indicator's warning goes too).
+ */
+export function useDismissRefusedChange(clubId: string, forgetHere?: (entry: RejectedEntry) => Promise<void>) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (rejectedId: string) => apiFetch<void>(`/api/clubs/${clubId}/sync/rejected/${rejectedId}/dismiss`, { method: 'POST' }),
+    mutationFn: async (entry: RejectedEntry) => {
+      await apiFetch<void>(`/api/clubs/${clubId}/sync/rejected/${entry.id}/dismiss`, { method: 'POST' });
+      await forgetHere?.(entry);
+    },
     onSettled: () => qc.invalidateQueries({ queryKey: rejectedKey(clubId) }),
   });
 }

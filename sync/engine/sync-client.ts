@@ -71,6 +71,10 @@ export interface SyncClient {
   list<C extends CollectionName>(collection: C, filter?: RecordFilter, opts?: { includeDeleted?: boolean }): Promise<StoredRecord<C>[]>;
   recordSyncState(collection: CollectionName, id: string): Promise<RecordSyncState>;
   rejections(): Promise<LocalRejection[]>;
+  /** This device's id (the server names it on each refused change it lists). */
+  readonly deviceId: string;
+  /** Forget a refusal the person has read (after dismissing it on the server), so the warning goes away. */
+  dismissRejection(mutationId: number): Promise<void>;
   subscribe(listener: ChangeListener): () => void;
   status(): SyncStatus;
   subscribeStatus(listener: (s: SyncStatus) => void): () => void;
@@ -247,6 +251,13 @@ export async function createSyncClient(opts: SyncClientOptions): Promise<SyncCli
     },
     recordSyncState: (collection, id) => store.recordSyncState(collection, id),
     rejections: () => store.rejections(),
+    deviceId,
+    async dismissRejection(mutationId) {
+      const refused = (await store.rejections()).find((r) => r.mutationId === mutationId);
+      if (!refused) return;
+      await store.dismissRejection(mutationId);
+      notify(new Set([refused.collection]));
+    },
     subscribe(listener) {
       listeners.add(listener);
       return () => listeners.delete(listener);

@@ -95,6 +95,19 @@ export function localStoreContract(label: string, open: OpenStore): void {
       expect(await store.rejections()).toHaveLength(0);
     });
 
+    it('forgets a refusal the person dismissed, and the record is no longer shown as refused', async () => {
+      const store = await open(freshName());
+      await store.applyPullPage({ records: [wire({ siteId: SITE, label: 'Oak 1', heightM: 18 }, 5)], cursor: '5', final: true });
+      await store.writeLocal(draft({ heightM: -3 }, 2000), CLUB);
+      await store.markPushed(1, [{ mutationId: 1, collection: 'supports', recordId: REC, op: 'upsert', code: 'invalid', message: 'heightM: height must be above 0' }]);
+      expect(await store.recordSyncState('supports', REC)).toBe('rejected');
+      await store.dismissRejection(99); // unknown: nothing happens
+      expect(await store.rejections()).toHaveLength(1);
+      await store.dismissRejection(1);
+      expect(await store.rejections()).toEqual([]);
+      expect(await store.recordSyncState('supports', REC)).toBe('synced');
+    });
+
     it('applies a pull page with its cursor, keeps unsynced changes on top, and drops confirmed ones on the last page', async () => {
       const store = await open(freshName());
       await store.writeLocal(draft({ siteId: SITE, label: 'Mine' }, 1000), CLUB);

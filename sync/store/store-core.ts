@@ -190,6 +190,9 @@ export function createStoreFromTx(run: RunTx, close: () => Promise<void>): Local
       const rows = await run('readonly', 'read', (tx) => tx.allRejections());
       return rows.map((r) => localRejectionSchema.parse(r)).sort((a, b) => b.mutationId - a.mutationId);
     },
+    dismissRejection(mutationId) {
+      return run('readwrite', 'dismiss-rejection', (tx) => tx.deleteRejection(mutationId));
+    },
     async recordSyncState(collection, id): Promise<RecordSyncState> {
       return run('readonly', 'read', async (tx) => {
         const pending = parseOutbox(await tx.outboxForRecord(collection, id));

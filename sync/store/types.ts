@@ -78,7 +78,7 @@ export class StorageFullError extends Error {
 }
 
 /** Test hook: called inside a transaction after its writes and before it commits; throwing rolls it back. */
-export type BeforeCommitHook = (operation: 'write-local' | 'mark-pushed' | 'apply-pull-page' | 'reset-for-resync' | 'set-meta') => void;
+export type BeforeCommitHook = (operation: 'write-local' | 'mark-pushed' | 'apply-pull-page' | 'reset-for-resync' | 'set-meta' | 'dismiss-rejection') => void;
 
 /**
  * The device's database. Every method is one transaction: a local change and its outbox entry are written
@@ -103,6 +103,8 @@ export interface LocalStore {
   getMeta(): Promise<SyncMeta>;
   setMeta(patch: Partial<SyncMeta>): Promise<void>;
   rejections(): Promise<LocalRejection[]>;
+  /** The person has read a refusal: forget it here (its record's state goes back to synced or pending). */
+  dismissRejection(mutationId: number): Promise<void>;
   recordSyncState(collection: CollectionName, id: string): Promise<RecordSyncState>;
   close(): Promise<void>;
 }

@@ -57,6 +57,27 @@ describe('sync client local writes', () => {
     expect(await c.get('supports', id)).toMatchObject({ label: 'Oak', lat: 44.5012, maxEnds: 2, notes: '' });
   });
 
+  it('a refused change the person dismissed is forgotten on the device: the refused count drops and the record is synced again', async () => {
+    const refusing: SyncTransport = {
+      async push(req) {
+        const m = req.mutations[0]!;
+        return { type: 'pushed', lastAppliedMutationId: m.mutationId, rejected: [{ mutationId: m.mutationId, collection: m.collection, recordId: m.recordId, op: m.op, code: 'forbidden', message: 'your role may not do this' }], serverTimeMs: 1_000 } satisfies PushResponse;
+      },
+      pull: fakeServer().transport.pull,
+    };
+    const c = await client(createMemoryStore(), refusing);
+    const id = await c.create('supports', supportFields('Oak'));
+    await c.syncNow();
+    const [refused] = await c.rejections();
+    expect(refused).toMatchObject({ recordId: id, code: 'forbidden' });
+    expect(c.status().rejectedCount).toBe(1);
+    expect(c.deviceId).toBe('unit-device');
+    await c.dismissRejection(refused!.mutationId);
+    expect(await c.rejections()).toEqual([]);
+    await expect.poll(() => c.status().rejectedCount).toBe(0);
+    expect(await c.recordSyncState('supports', id)).toBe('synced');
+  });
+
   it('keeps measurements as taken (append-only) and review decisions beyond withdrawal', async () => {
     const c = await client();
     const m = await c.create('measurements', measurementFields('33333333-3333-4333-8333-333333333333', 14));
