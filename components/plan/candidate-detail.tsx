@@ -29,7 +29,11 @@ type Props = {
 /** Everything about one candidate spot: where, how it radiates, what its feed does, and what was checked. */
 export function CandidateDetail({ records, file, candidate: c, purpose, supportLabel, onAssign, assignLabel, compact, testID }: Props) {
   const { formatLengthM } = useUnits();
-  const input = useMemo(() => evaluateSpot(file, { stationId: c.stationId, band: c.band, shape: c.shape, supportIds: c.supportIds, geometryId: c.id })?.patternInput ?? null, [file, c]);
+  // The bearing as well as the id: a typed leg bearing is not among the engine's directions, so its id alone finds nothing.
+  const input = useMemo(
+    () => evaluateSpot(file, { stationId: c.stationId, band: c.band, shape: c.shape, supportIds: c.supportIds, geometryId: c.id, legAzimuthDeg: c.shape === 'inverted-v' ? c.wireAzimuthDeg : null })?.patternInput ?? null,
+    [file, c],
+  );
   const labels = useMemo(() => labelsOf(records.supports, records.hazards, records.operatingPositions, records.stations, records.coax), [records]);
   const where = c.shape === 'flat' ? `Flat-top between ${c.supportIds.map(supportLabel).join(' and ')}` : `Inverted-V from ${supportLabel(c.supportIds[0])}`;
   return (

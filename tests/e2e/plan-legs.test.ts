@@ -104,6 +104,9 @@ describe('an inverted-V keeps the leg direction the lead chose', { timeout: 300_
     // Leg ends 4.36 m out: a 20 m leg at the 120° apex, leg·sin 60° (what the engine uses; right-triangle trigonometry).
     expect(await legs.textContent()).toMatch(/each leg end comes down 4\.[34] m out from the support/);
     expect(legEndOffsetM(5.03, 120)).toBeCloseTo(4.36, 2);
+    // The typed bearing is not one of the engine's directions, and its pictures are drawn all the same.
+    await byTestId(page, 'plan-candidate-0-pattern-elevation').waitFor();
+    await byTestId(page, 'plan-candidate-0-pattern-azimuth').waitFor();
     await legs.scrollIntoViewIfNeeded();
     await screenshot(page, 'plan-legs-candidate', 'wide');
     await byTestId(page, 'plan-candidate-0-assign').click();
