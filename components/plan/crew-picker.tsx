@@ -47,7 +47,7 @@ export function CrewPicker({ roster, value, onChange }: { roster: MemberRoster; 
 }
 
 function Chip({ on, onPress, member, missingIndex, id }: { on: boolean; onPress: () => void; member?: Member; missingIndex?: number; id?: string }) {
-  const name = member ? member.displayName || member.email : `Chosen person ${missingIndex} (not in the member list here)`;
+  const name = member ? member.displayName || member.email : `Chosen person ${missingIndex} (name not on this device)`;
   const role = member && member.role !== 'crew' ? ROLE_WORDS[member.role] : null;
   const userId = member?.userId ?? id!;
   return (
@@ -61,7 +61,7 @@ function Chip({ on, onPress, member, missingIndex, id }: { on: boolean; onPress:
       style={[styles.chip, on && styles.chipOn]}
     >
       {on ? <Icon name="check-circle" size={18} color={colors.onAction} /> : null}
-      <View>
+      <View style={styles.chipText}>
         <Txt variant="label" color={on ? colors.onAction : colors.action}>{name}</Txt>
         {role ? <Txt variant="caption" color={on ? colors.onAction : colors.inkMuted}>{role}</Txt> : null}
       </View>
@@ -81,6 +81,9 @@ const styles = StyleSheet.create({
     borderRadius: radii.m,
     paddingHorizontal: spacing.m,
     paddingVertical: spacing.xs,
+    maxWidth: '100%',
   },
   chipOn: { backgroundColor: colors.action },
+  // Long names wrap inside the chip instead of running off a phone screen.
+  chipText: { flexShrink: 1 },
 });

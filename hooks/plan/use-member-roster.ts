@@ -2,6 +2,7 @@ import { useEffect, useMemo } from 'react';
 import { z } from 'zod';
 import { useMembers } from '@/hooks/api/use-members';
 import { readSetting, writeSetting } from '@/hooks/local-setting';
+import { useSyncStatus } from '@/hooks/sync';
 import { crewFirst } from './crew-words';
 import { memberSchema, type Member } from '@/shared/schemas';
 
@@ -42,9 +43,12 @@ export function useMemberRoster(clubId: string | undefined): MemberRoster {
   }, [clubId, query.data]);
   // Read once per club (and again when the query gives up), not on every render.
   const cached = useMemo(() => readCache(clubId), [clubId, query.isError]);
+  // Offline the request only retries until it fails: that is not "loading", the list needs a connection.
+  const { online } = useSyncStatus();
+  const fetching = query.fetchStatus === 'fetching' && online;
   return useMemo(() => {
     if (query.data) return { members: crewFirst(query.data), cachedAt: null, loading: false };
-    if (cached) return { members: crewFirst(cached.members), cachedAt: cached.savedAt, loading: query.isLoading };
-    return { members: undefined, cachedAt: null, loading: query.isLoading };
-  }, [query.data, query.isLoading, cached]);
+    if (cached) return { members: crewFirst(cached.members), cachedAt: cached.savedAt, loading: fetching };
+    return { members: undefined, cachedAt: null, loading: fetching };
+  }, [query.data, fetching, cached]);
 }

@@ -100,7 +100,7 @@ describe('crews assigned to stations', { timeout: 300_000 }, () => {
     expect(errors).toEqual([]);
   });
 
-  it('at phone size, offline after a reload, the form still lists the members the device saved and keeps the chosen crew', async () => {
+  it('at phone size, offline after a reload, the form lists the members the device saved; with none saved it says so and keeps the chosen crew', async () => {
     const { page, context, errors } = await openAs('lead', 'phone');
     await page.goto(`${baseUrl()}/events/${eventId}/plan`);
     await byTestId(page, `station-${ids.high}`).click();
@@ -116,7 +116,20 @@ describe('crews assigned to stations', { timeout: 300_000 }, () => {
     await byTestId(page, 'station-crew').scrollIntoViewIfNeeded();
     await screenshot(page, 'crew-assign-form-offline', 'phone');
     await byTestId(page, 'station-cancel').click();
+    // With no saved member list at all (another phone, never online in the plan): the form says the list needs a
+    // connection, and the person already chosen stays chosen (shown without a name) so saving loses nothing.
+    await page.evaluate(() => Object.keys(localStorage).filter((k) => k.startsWith('loftline.members.')).forEach((k) => localStorage.removeItem(k)));
+    await page.reload();
+    await byTestId(page, `station-${ids.high}`).click({ timeout: 60_000 });
+    await byTestId(page, 'station-crew-offline').waitFor({ timeout: 60_000 });
+    expect(await byTestId(page, 'station-crew-offline').textContent()).toMatch(/needs a connection.*already chosen stays chosen/);
+    expect(await byTestId(page, `station-crew-${crewUserId}`).getAttribute('aria-checked')).toBe('true');
+    await byTestId(page, 'station-crew').scrollIntoViewIfNeeded();
+    await screenshot(page, 'crew-assign-form-no-list', 'phone');
+    await byTestId(page, 'station-save').click();
+    await byTestId(page, 'station-form').waitFor({ state: 'detached' });
     await context.setOffline(false);
+    await until('the crew still on the server after an offline save', async () => live(await pullAll(lead.token, clubId), 'stations').find((s) => s.id === ids.high && JSON.stringify(s.fields.crewMemberIds) === JSON.stringify([crewUserId]) && s));
     expect(errors).toEqual([]);
   });
 
