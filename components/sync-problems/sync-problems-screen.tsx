@@ -4,15 +4,14 @@ import { EmptyState, ErrorText, Screen, Txt } from '@/components/ui';
 import { colors, spacing } from '@/constants/theme';
 import { errorMessage } from '@/hooks/api/client';
 import { useMembers } from '@/hooks/api/use-members';
-import { useMyRefusedChanges, useOpenConflicts } from '@/hooks/api/use-sync-problems';
+import { CONFLICT_READERS, useMyRefusedChanges, useOpenConflicts } from '@/hooks/api/use-sync-problems';
 import { useBreakpoint } from '@/hooks/use-breakpoint';
 import { useCurrentClub } from '@/hooks/use-current-club';
-import { can, type Role } from '@/shared/schemas';
+import { can } from '@/shared/schemas';
 import { ConflictCard } from './conflict-card';
 import { RefusedChangeCard } from './refused-change-card';
 
 /** Who sees the club's safety conflicts: the people who plan and the people who check. */
-const SEES_CONFLICTS: readonly Role[] = ['admin', 'lead', 'safety'];
 
 /*
  * "Changes to check": the club's safety-relevant values recorded twice at once (leads and admins settle them,
@@ -23,7 +22,7 @@ export function SyncProblemsScreen() {
   const { club, role } = useCurrentClub();
   const { isWide } = useBreakpoint();
   const clubId = club?.id;
-  const seesConflicts = role !== null && SEES_CONFLICTS.includes(role);
+  const seesConflicts = role !== null && CONFLICT_READERS.includes(role);
   const conflicts = useOpenConflicts(clubId, seesConflicts);
   const refused = useMyRefusedChanges(clubId);
   const members = useMembers(seesConflicts ? clubId : undefined);
@@ -33,7 +32,8 @@ export function SyncProblemsScreen() {
     return () => clearInterval(t);
   }, []);
   const names = useMemo(() => new Map((members.data ?? []).map((m) => [m.userId, m.callSign ? `${m.displayName} ${m.callSign}` : m.displayName])), [members.data]);
-  const nameOf = (id: string | null) => (id ? (names.get(id) ?? 'a former member') : 'someone unknown');
+  // Until the member list is in (or when it cannot be had offline), nobody is called a former member.
+  const nameOf = (id: string | null) => (id ? (names.get(id) ?? (members.data ? 'a former member' : 'a club member')) : 'someone unknown');
   if (!clubId || !role) return null;
 
   const conflictList = seesConflicts ? (

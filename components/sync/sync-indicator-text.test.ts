@@ -44,4 +44,10 @@ describe('sync indicator words (common practice: say what is kept where, never h
   it('says so before the first sync', () => {
     expect(indicatorText(base, NOW).detail).toBe('Not synced yet on this device.');
   });
+
+  it('tells people who may settle them how many values were recorded twice, and stays quiet when there are none', () => {
+    expect(indicatorText(base, NOW, 2).warnings).toEqual(['2 values were recorded twice at once and need a look on site: see Changes to check.']);
+    expect(indicatorText(base, NOW, 1).warnings[0]).toMatch(/^1 value was recorded twice/);
+    expect(indicatorText(base, NOW).warnings).toEqual([]);
+  });
 });

@@ -4,7 +4,9 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { Icon, Txt } from '@/components/ui';
 import type { IconName } from '@/constants/icons';
 import { colors, radii, spacing } from '@/constants/theme';
+import { CONFLICT_READERS, useOpenConflicts } from '@/hooks/api/use-sync-problems';
 import { useSyncContext, useSyncStatus } from '@/hooks/sync';
+import { useCurrentClub } from '@/hooks/use-current-club';
 import { indicatorText, type IndicatorText } from './sync-indicator-text';
 
 /*
@@ -30,7 +32,11 @@ export function SyncIndicator() {
     const t = setInterval(() => setNowMs(Date.now()), 30_000);
     return () => clearInterval(t);
   }, []);
-  const text = indicatorText(status, nowMs);
+  const { club, role } = useCurrentClub();
+  // Leads, admins and safety officers also hear of values recorded twice at once (they live on the server).
+  const conflicts = useOpenConflicts(club?.id, status.online && role !== null && CONFLICT_READERS.includes(role));
+  const openConflicts = conflicts.data?.length ?? 0;
+  const text = indicatorText(status, nowMs, openConflicts);
   const look = LOOK[text.tone];
   const summary = `${text.headline}. ${text.detail}${text.warnings.length ? ` ${text.warnings.join(' ')}` : ''}`;
   return (
@@ -73,7 +79,7 @@ export function SyncIndicator() {
               router.navigate('/sync-problems');
             }}
           >
-            {status.rejectedCount > 0 ? 'See the refused changes' : 'Changes to check'} ›
+            {status.rejectedCount > 0 ? 'See the refused changes' : openConflicts > 0 ? 'See the values recorded twice' : 'Changes to check'} ›
           </Txt>
         </View>
       ) : null}

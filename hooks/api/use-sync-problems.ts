@@ -1,6 +1,7 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { conflictEntrySchema, rejectedEntrySchema, type RejectedEntry, type ResolveConflictBody } from '@/sync';
+import type { Role } from '@/shared/schemas';
 import { apiFetch } from './client';
 
 /*
@@ -10,6 +11,9 @@ import { apiFetch } from './client';
 
 const conflictsKey = (clubId: string) => ['clubs', clubId, 'sync', 'conflicts'] as const;
 const rejectedKey = (clubId: string) => ['clubs', clubId, 'sync', 'rejected'] as const;
+
+/** Who reads the club's values recorded twice (leads and admins settle them; safety officers read them). */
+export const CONFLICT_READERS: readonly Role[] = ['admin', 'lead', 'safety'];
 
 export function useOpenConflicts(clubId: string | undefined, enabled = true) {
   return useQuery({

@@ -73,11 +73,14 @@ describe('values recorded twice', () => {
     const phone = await newPage(browser(), 'phone');
     await signIn(phone.page, DEMO_USERS.lead);
     await byTestId(phone.page, 'sync-indicator').click();
+    // The indicator tells the lead there are values recorded twice (other conflicts of the demo may add to the count).
+    await expect.poll(() => byTestId(phone.page, 'sync-indicator-details').textContent(), { timeout: 30_000 }).toMatch(/recorded twice at once/);
     await byTestId(phone.page, 'sync-indicator-problems-link').click();
     await byTestId(phone.page, 'sync-problems-title').waitFor();
     const text = byTestId(phone.page, `${card}-text`);
     // The label comes from the lead's local copy of the support, so this also waits for the pull.
-    await until('the conflict to name the tree', async () => (await text.textContent())?.includes(label) ?? false, 60_000);
+    // The people's names come from the member list, which may arrive after the conflicts.
+    await until('the conflict to name the tree and both people', async () => { const t = (await text.textContent()) ?? ''; return t.includes(label) && t.includes('Tomas Ekberg'); }, 60_000);
     const sentence = (await text.textContent())!;
     expect(sentence).toMatch(new RegExp(`${label} height: kept 14\\.0 m \\(June Okafor.*, \\d\\d:\\d\\d.*\\); also recorded 11\\.0 m \\(Tomas Ekberg.*, \\d\\d:\\d\\d.*\\)`));
     expect(sentence).not.toMatch(/correct/i);
