@@ -2,6 +2,26 @@ import type { AssignOption, AssignProblem, AssignSolution } from './assign';
 import type { AntennaPlan } from './plan-site';
 import type { SeparationResult } from './separation';
 
+/** A candidate id (`20m:iv:<support>@45`, `40m:flat:<a>~<b>`) in words: "the inverted-V at <support> (legs 45°–225°)". */
+export function spotWords(candidateId: string): string {
+  const iv = /^[^:]+:iv:(.+)@(\d+(?:\.\d+)?)$/.exec(candidateId);
+  if (iv) {
+    const az = Number(iv[2]);
+    return `the inverted-V at ${iv[1]} (legs ${az}°–${az + 180}°)`;
+  }
+  const flat = /^[^:]+:flat:(.+)~(.+)$/.exec(candidateId);
+  return flat ? `the flat-top ${flat[1]}–${flat[2]}` : candidateId;
+}
+
+/** An antenna's key (`<station>:<band>`) in words: "<station> 20m". */
+export const antennaWords = (needKey: string): string => {
+  const at = needKey.lastIndexOf(':');
+  return at < 0 ? needKey : `${needKey.slice(0, at)} ${needKey.slice(at + 1)}`;
+};
+
+/** A clearance key (`power-line:<line>`) in words: "power line <line>". */
+const blockerWords = (key: string): string => (key.startsWith('power-line:') ? `power line ${key.slice('power-line:'.length)}` : key);
+
 /** Plain lines saying what limited the choice for antenna i. */
 export function explainAntenna(
   i: number,
@@ -20,8 +40,8 @@ export function explainAntenna(
     return lines;
   }
   if (plan.blockedCount > 0) {
-    const top = plan.blockedBy.slice(0, 3).map((b) => `${b.key} ×${b.count}`).join(', ');
-    lines.push(`${plan.blockedCount} of ${plan.candidateCount} spots are blocked (${top})`);
+    const top = plan.blockedBy.slice(0, 3).map((b) => `${blockerWords(b.key)} ×${b.count}`).join(', ');
+    lines.push(`${plan.blockedCount} of ${plan.candidateCount} spots are blocked (by ${top})`);
   }
   if (options.length === 0) {
     lines.push(`no usable spot: every spot for ${need.band} is blocked`);
@@ -41,14 +61,14 @@ export function explainAntenna(
   });
   for (const s of best.supportIds) {
     const users = used.get(s) ?? [];
-    if (users.length + 1 > (maxEnds.get(s) ?? 1)) reasons.push(`support ${s} carries at most ${maxEnds.get(s) ?? 1} end(s), taken by ${users.join(' and ')}`);
+    if (users.length + 1 > (maxEnds.get(s) ?? 1)) reasons.push(`support ${s} carries at most ${maxEnds.get(s) ?? 1} end(s), taken by ${users.map(antennaWords).join(' and ')}`);
   }
   solution.choice.forEach((o, j) => {
     if (!o || j === i) return;
     const r = separation(best, o);
-    if (r.level === 'blocked') reasons.push(`${r.wavelengths.toFixed(2)} λ from ${o.needKey} (needs ${(r.requiredM ?? 0).toFixed(1)} m)`);
+    if (r.level === 'blocked') reasons.push(`${r.wavelengths.toFixed(2)} λ from ${antennaWords(o.needKey)}, which took ${spotWords(o.id.split('#')[1] ?? o.id)} (needs ${(r.requiredM ?? 0).toFixed(1)} m apart)`);
   });
-  const name = best.id.split('#')[1] ?? best.id;
+  const name = spotWords(best.id.split('#')[1] ?? best.id);
   const more = reasons.length > 3 ? `; and ${reasons.length - 3} more` : '';
   if (reasons.length > 0) lines.push(`best spot ${name} (score ${best.score.toFixed(2)}) not used: ${reasons.slice(0, 3).join('; ')}${more}`);
   else lines.push(`best spot ${name} (score ${best.score.toFixed(2)}) was given up for a higher total across all antennas`);
