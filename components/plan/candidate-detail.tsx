@@ -37,7 +37,9 @@ export function CandidateDetail({ records, file, candidate: c, purpose, supportL
   const labels = useMemo(() => labelsOf(records.supports, records.hazards, records.operatingPositions, records.stations, records.coax), [records]);
   const where = c.shape === 'flat' ? `Flat-top between ${c.supportIds.map(supportLabel).join(' and ')}` : `Inverted-V from ${supportLabel(c.supportIds[0])}`;
   return (
-    <Card testID={testID} title={`${c.band} · ${where}`} right={<ClearanceBadge level={c.level} testID={`${testID}-level`} />}>
+    // Side by side the columns are narrow: the clearance badge goes under the title instead of beside it.
+    <Card testID={testID} title={`${c.band} · ${where}`} right={compact ? undefined : <ClearanceBadge level={c.level} testID={`${testID}-level`} />}>
+      {compact ? <View style={styles.badge}><ClearanceBadge level={c.level} testID={`${testID}-level`} /></View> : null}
       <Txt variant="bodyStrong">{c.summary}</Txt>
       <Tabular>Score {c.score.toFixed(2)} · wire {formatLengthM(c.wireLengthM)} · feed {formatLengthM(c.feedHeightM)} high ({c.heightWavelengths.toFixed(2)} λ)</Tabular>
       <Tabular>Broadside {c.broadsideDeg.map((d) => `${d.toFixed(0)}°`).join(' and ')} · wire runs {c.wireAzimuthDeg.toFixed(0)}°{c.apexDeg ? ` · apex ${c.apexDeg}°` : ''}</Tabular>
@@ -57,7 +59,7 @@ export function CandidateDetail({ records, file, candidate: c, purpose, supportL
           {c.level === 'blocked' ? <Txt variant="caption" color={colors.danger}>Blocked: it can be drawn, but no one can clear it to raise.</Txt> : null}
         </View>
       ) : null}
-      {!compact && input ? <PatternPictures input={input} band={c.band} wireAzimuthDeg={c.wireAzimuthDeg} purpose={purpose} testID={`${testID}-pattern`} /> : null}
+      {input ? <PatternPictures input={input} band={c.band} wireAzimuthDeg={c.wireAzimuthDeg} purpose={purpose} compact={compact} testID={`${testID}-pattern`} /> : null}
       {compact && input ? <Tabular>Takeoff {Math.round(c.pattern.takeoffDeg)}° · peak {c.pattern.peakGainDbi.toFixed(1)} dBi · SWR {c.pattern.swr50.toFixed(2)}</Tabular> : null}
       <Txt variant="label" style={styles.head}>Clearances</Txt>
       <ClearanceList clearances={c.clearances} labels={labels} testID={`${testID}-clearances`} />
@@ -68,5 +70,6 @@ export function CandidateDetail({ records, file, candidate: c, purpose, supportL
 
 const styles = StyleSheet.create({
   assign: { gap: spacing.xs, marginVertical: spacing.m },
+  badge: { alignItems: 'flex-start' },
   head: { marginTop: spacing.m, marginBottom: spacing.s },
 });

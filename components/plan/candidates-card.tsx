@@ -7,6 +7,7 @@ import { DEFAULT_PLAN_OPTIONS, evaluateSpot, type Candidate } from '@/shared/pla
 import type { Station, Support } from '@/shared/schemas';
 import type { SiteFile } from '@/shared/schemas/site-file';
 import { filterCandidates, type CandidateFilter } from './candidate-filters';
+import { withLabels } from './label-ids';
 import { ClearanceBadge } from './spot-state-badge';
 import { legBearingFor, legChoices, legsText, type LegChoice } from './leg-text';
 
@@ -17,11 +18,13 @@ type Props = {
   supports: readonly Support[];
   isWide: boolean;
   openIds: string[];
+  /** Record labels by id, for the engine's blocking keys ("power-line:<id>"). */
+  labels: ReadonlyMap<string, string>;
   onOpen: (c: Candidate, compare: boolean) => void;
 };
 
 /** Per station and band: the engine's ranked candidates, filterable, and a spot picked by hand. */
-export function CandidatesCard({ plan, file, stations, supports, isWide, openIds, onOpen }: Props) {
+export function CandidatesCard({ plan, file, stations, supports, isWide, openIds, labels, onOpen }: Props) {
   const needs = plan.status === 'done' ? plan.result.antennas : [];
   const [needKey, setNeedKey] = useState<string | null>(null);
   const [filter, setFilter] = useState<CandidateFilter>({ supportId: 'any', level: 'any' });
@@ -78,7 +81,10 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
         onChange={(level) => setFilter((f) => ({ ...f, level }))}
       />
       <Select label="Support" testID="candidates-support" options={[{ value: 'any', label: 'Any' }, ...planned.map((s) => ({ value: s.id, label: s.label }))]} value={filter.supportId} onChange={(supportId) => setFilter((f) => ({ ...f, supportId }))} />
-      {chosen ? <Txt variant="caption" color={colors.inkMuted}>{chosen.usableCount} usable of {chosen.candidateCount} possible spots; {chosen.blockedCount} blocked{chosen.blockedBy.length ? ` (by ${chosen.blockedBy.map((b) => b.key).join(', ')})` : ''}.</Txt> : null}
+      {plan.computedIn === 'main-thread' ? (
+        <Txt variant="caption" testID="plan-main-thread">Planning in this screen, not in the background: this browser could not start the background planner, so the screen may pause for a moment while a plan is worked out.</Txt>
+      ) : null}
+      {chosen ? <Txt variant="caption" color={colors.inkMuted}>{chosen.usableCount} usable of {chosen.candidateCount} possible spots; {chosen.blockedCount} blocked{chosen.blockedBy.length ? ` (by ${chosen.blockedBy.map((b) => withLabels(b.key, labels)).join(', ')})` : ''}.</Txt> : null}
       {list.length === 0 ? <Txt testID="candidates-none">No candidate passes these filters.</Txt> : null}
       {list.map((c, i) => (
         <View key={c.id}>

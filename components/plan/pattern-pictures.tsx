@@ -1,4 +1,4 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import Svg, { Circle, G, Line, Path, Text as SvgText } from 'react-native-svg';
 import { Tabular, Txt } from '@/components/ui';
@@ -10,10 +10,14 @@ import { azimuthPath, compassPoint, elevationPath, elevationPoint, elevationWedg
 const SIZE = 260;
 const R = 110;
 
-type Props = { input: DipoleInput; band: BandName; wireAzimuthDeg: number; purpose: OperatorWindowId; testID: string };
+/** compact: the elevation and azimuth pictures only (candidates compared side by side in narrow columns). */
+type Props = { input: DipoleInput; band: BandName; wireAzimuthDeg: number; purpose: OperatorWindowId; testID: string; compact?: boolean };
 
 /** The predicted elevation and azimuth patterns and the feed across the band, as pictures with numbers beside. */
-export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }: Props) {
+export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID, compact }: Props) {
+  // Drawn at SIZE and scaled down to fit a narrower column (three candidates side by side), never up.
+  const [fitPx, setFitPx] = useState(SIZE);
+  const k = Math.min(1, fitPx / SIZE);
   const win = OPERATOR_WINDOWS.find((w) => w.id === purpose)!;
   // The azimuth cut is taken in the middle of the station's angle window: where its contacts are.
   const azElevationDeg = Math.round((win.fromDeg + win.toDeg) / 2);
@@ -33,10 +37,10 @@ export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }
   const maxSwr = 4;
   const differ = data.res.zeroReactanceMhz !== null && Math.abs(data.res.zeroReactanceMhz - data.res.lowestSwrMhz) > 0.0005;
   return (
-    <View style={styles.wrap} testID={testID}>
+    <View style={styles.wrap} testID={testID} onLayout={(e) => setFitPx(Math.max(120, e.nativeEvent.layout.width))}>
       <View style={styles.picture}>
         <Txt variant="label">Elevation (broadside)</Txt>
-        <Svg width={SIZE} height={SIZE / 2 + 60} accessibilityLabel={`Elevation pattern: peak ${data.peak.gainDbi.toFixed(1)} dBi at ${data.peak.deg}° takeoff. Shaded: the ${win.label} window, ${win.fromDeg} to ${win.toDeg} degrees.`} testID={`${testID}-elevation`}>
+        <Svg width={SIZE * k} height={(SIZE / 2 + 60) * k} viewBox={`0 0 ${SIZE} ${SIZE / 2 + 60}`} accessibilityLabel={`Elevation pattern: peak ${data.peak.gainDbi.toFixed(1)} dBi at ${data.peak.deg}° takeoff. Shaded: the ${win.label} window, ${win.fromDeg} to ${win.toDeg} degrees.`} testID={`${testID}-elevation`}>
           <Path d={elevationWedge(win.fromDeg, win.toDeg, cx, cy, R)} fill={colors.infoSoft} stroke={colors.info} strokeWidth={1} />
           {[1, 2 / 3, 1 / 3].map((f) => (
             <Path key={f} d={`M${cx - R * f} ${cy} A${R * f} ${R * f} 0 0 1 ${cx + R * f} ${cy}`} fill="none" stroke={colors.lineSoft} strokeWidth={1} />
@@ -52,7 +56,7 @@ export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }
       </View>
       <View style={styles.picture}>
         <Txt variant="label">Azimuth at {azElevationDeg}° elevation (north up)</Txt>
-        <Svg width={SIZE} height={SIZE} accessibilityLabel={`Azimuth pattern, north up; the wire runs ${wireAzimuthDeg.toFixed(0)}° and ${(wireAzimuthDeg + 180).toFixed(0)}°; the most signal goes broadside.`} testID={`${testID}-azimuth`}>
+        <Svg width={SIZE * k} height={SIZE * k} viewBox={`0 0 ${SIZE} ${SIZE}`} accessibilityLabel={`Azimuth pattern, north up; the wire runs ${wireAzimuthDeg.toFixed(0)}° and ${(wireAzimuthDeg + 180).toFixed(0)}°; the most signal goes broadside.`} testID={`${testID}-azimuth`}>
           {[1, 2 / 3, 1 / 3].map((f) => <Circle key={f} cx={cx} cy={SIZE / 2} r={R * f} fill="none" stroke={colors.lineSoft} strokeWidth={1} />)}
           <WireMark az={wireAzimuthDeg} cx={cx} cy={SIZE / 2} />
           <Path d={azimuthPath(data.az, data.azPeak, wireAzimuthDeg, cx, SIZE / 2, R)} fill="rgba(224,87,15,0.18)" stroke={colors.brand} strokeWidth={2.5} />
@@ -60,7 +64,7 @@ export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }
         </Svg>
         <Txt variant="caption" color={colors.inkMuted}>Grey line: the wire. Rings 10 dB apart.</Txt>
       </View>
-      <View style={styles.picture}>
+      {compact ? null : <View style={styles.picture}>
         <Txt variant="label">SWR on 50 Ω across {band}</Txt>
         <Svg width={SIZE} height={box.y + box.height + 34} testID={`${testID}-swr`} accessibilityLabel={`SWR across the band: lowest ${data.res.lowestSwr.toFixed(2)} at ${data.res.lowestSwrMhz.toFixed(3)} MHz.`}>
           {[1, 2, 3, 4].map((s) => {
@@ -82,7 +86,7 @@ export function PatternPictures({ input, band, wireAzimuthDeg, purpose, testID }
         <Tabular>{data.res.zeroReactanceMhz !== null ? `Zero reactance at ${data.res.zeroReactanceMhz.toFixed(3)} MHz (blue, dashed)` : 'No zero-reactance point inside the band'}</Tabular>
         {differ ? <Txt variant="caption">These differ: the lowest SWR on 50 Ω falls where the resistance is nearest 50 Ω, not where the reactance is zero. Trim for the lowest SWR.</Txt> : null}
         <Tabular>Feed at {input.freqMhz.toFixed(3)} MHz: {data.sweep[15].resistanceOhm.toFixed(0)} {data.sweep[15].reactanceOhm >= 0 ? '+' : '−'} j{Math.abs(data.sweep[15].reactanceOhm).toFixed(0)} Ω</Tabular>
-      </View>
+      </View>}
     </View>
   );
 }
@@ -110,5 +114,6 @@ function FreqMark({ mhz, lowMhz, highMhz, box, color, dashed }: { mhz: number; l
 
 const styles = StyleSheet.create({
   wrap: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.l },
-  picture: { gap: spacing.xs, maxWidth: SIZE + 10 },
+  // Shrinks with a narrow column (the pictures scale with it) so its captions wrap instead of spilling over.
+  picture: { gap: spacing.xs, maxWidth: SIZE + 10, flexShrink: 1 },
 });

@@ -95,10 +95,10 @@ export function PlanScreen({ eventId }: { eventId: string }) {
             onRemove={(spot) => run(assign.remove(spot), 'Assignment removed.')}
           />
           {!isWide ? detail : null}
-          {reviews.file ? <CandidatesCard plan={plan} file={reviews.file} stations={stations} supports={records.supports} isWide={isWide} openIds={open.map((c) => c.id)} onOpen={openCandidate} /> : null}
+          {reviews.file ? <CandidatesCard plan={plan} file={reviews.file} stations={stations} supports={records.supports} isWide={isWide} openIds={open.map((c) => c.id)} labels={labelsOf(records.supports, records.hazards)} onOpen={openCandidate} /> : null}
           <StationsCard eventId={eventId} stations={stations} coax={records.coax.filter((c) => c.deletedAt === null)} canPlan={canPlan} />
         </View>
-        {isWide ? <View style={styles.right}>{detail ?? <CautionsBox testID="plan-cautions" />}</View> : null}
+        {isWide ? <View style={[styles.right, open.length > 1 && styles.rightCompare]}>{detail ?? <CautionsBox testID="plan-cautions" />}</View> : null}
       </View>
       {!isWide ? <CautionsBox testID="plan-cautions" /> : null}
     </Screen>
@@ -112,6 +112,8 @@ const styles = StyleSheet.create({
   columnsWide: { flexDirection: 'row', alignItems: 'flex-start' },
   left: { flex: 5, minWidth: 0 },
   right: { flex: 6, minWidth: 0 },
+  // Two or three candidates side by side need the room more than the list beside them does.
+  rightCompare: { flex: 7 },
   detailHead: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', marginBottom: spacing.s },
   compare: { gap: spacing.l, marginTop: spacing.m },
   compareWide: { flexDirection: 'row', alignItems: 'flex-start' },

@@ -56,7 +56,7 @@ export function CrewSheet({ records, evaluation: s, canMark }: { records: EventR
           return (
             <View key={id} style={styles.support}>
               <Txt variant="bodyStrong">{sup?.label ?? 'A removed support'}</Txt>
-              {sup ? <Tabular>{sup.kind}, {formatLengthM(sup.heightM)} tall · attach at {formatLengthM(sup.attachHeightM ?? sup.heightM)}{sup.launchMethod ? ` · line up by ${sup.launchMethod}` : ''}</Tabular> : null}
+              {sup ? <Tabular>{sup.kind}, {formatLengthM(sup.heightM)} tall · attach at {formatLengthM(sup.attachHeightM ?? sup.heightM)}{sup.launchMethod && sup.launchMethod !== 'none' ? ` · line up by ${sup.launchMethod}` : ''}</Tabular> : null}
               {sup?.condition ? <Txt variant="caption">{sup.condition}</Txt> : null}
               <View style={styles.photos}>{photos.map((p) => <PhotoThumb key={p.id} photo={p} onOpen={setPhoto} />)}</View>
             </View>

@@ -3,10 +3,20 @@ import { Platform } from 'react-native';
 /*
  * On the web, printing the sheets gives one page per antenna: the app's navigation and buttons are hidden
  * and each sheet starts a new page. react-native-web writes dataSet as data-* attributes.
+ * The app's screens are a fixed-height shell with a scrolling body (react-native-web's ScrollView is a div with
+ * overflow: auto), which on paper would print only what fits the window: in print every box that holds a sheet
+ * (found with :has) grows to its content and lets it flow onto as many pages as there are sheets.
  */
 const CSS = `@media print {
-  [data-sheet="page"] { break-after: page; page-break-after: always; }
-  [data-print="hide"], [role="navigation"], [data-testid="sheet-mark-up"], [data-testid="sheet-mark-down"] { display: none !important; }
+  @page { margin: 12mm; }
+  html, body, #root, div:has([data-sheet="page"]) {
+    height: auto !important; min-height: 0 !important; max-height: none !important; overflow: visible !important;
+    position: static !important; flex: none !important; transform: none !important; background: #fff !important;
+  }
+  [data-sheet="page"] { break-after: page; page-break-after: always; break-inside: avoid; margin-bottom: 0 !important; }
+  [data-sheet="page"]:last-child { break-after: auto; page-break-after: auto; }
+  [data-print="hide"], [role="navigation"], [data-testid="bottom-bar"], [data-testid="phone-header"],
+  [data-testid="sheet-mark-up"], [data-testid="sheet-mark-down"] { display: none !important; }
   [data-print="all"] { display: flex !important; }
   body { background: #fff !important; }
 }`;

@@ -1,9 +1,14 @@
 import { useEffect, useMemo, useState } from 'react';
 import type { PlanResult } from '@/shared/plan';
 import type { SiteFile } from '@/shared/schemas/site-file';
-import { computePlan } from './plan-compute';
+import { computePlan, planComputedIn } from './plan-compute';
 
-export type PlanState = { status: 'idle' } | { status: 'computing' } | { status: 'done'; result: PlanResult } | { status: 'failed'; message: string };
+/** `computedIn` says whether the plan ran in the background worker or, where none could start, on the main thread. */
+export type PlanState =
+  | { status: 'idle' }
+  | { status: 'computing' }
+  | { status: 'done'; result: PlanResult; computedIn: 'worker' | 'main-thread' }
+  | { status: 'failed'; message: string };
 
 /** The engine's plan for a site file, recomputed (off the main thread on the web) whenever the file changes. */
 export function usePlanResult(file: SiteFile | null): PlanState {
@@ -22,7 +27,7 @@ export function usePlanResult(file: SiteFile | null): PlanState {
     let live = true;
     setState({ status: 'computing' });
     computePlan(parsed).then(
-      (result) => live && setState({ status: 'done', result }),
+      (result) => live && setState({ status: 'done', result, computedIn: planComputedIn() }),
       (err: Error) => live && setState({ status: 'failed', message: err.message }),
     );
     return () => {
