@@ -39,7 +39,11 @@ export async function run(): Promise<void> {
     };
     const lead = await user('lead');
     for (let i = 0; i < SAFETY_OFFICERS; i++) await user('safety', lead.clubId);
-    for (let i = 0; i < 5; i++) await user(i % 2 ? 'crew' : 'scout', lead.clubId);
+    const crewIds: string[] = [];
+    for (let i = 0; i < 5; i++) {
+      const u = await user(i % 2 ? 'crew' : 'scout', lead.clubId);
+      if (i % 2) crewIds.push(u.userId);
+    }
 
     const deviceId = 'bench-notify';
     let mutationId = 0;
@@ -73,6 +77,23 @@ export async function run(): Promise<void> {
     console.log(`  without the notification hook  ${median(times.without).toFixed(1)} ms`);
     console.log(`  with it (${SAFETY_OFFICERS} safety officers)    ${median(times.with).toFixed(1)} ms  (${queued} e-mails queued in all: one per officer per push)`);
     console.log(`  hook cost                      ${(median(times.with) - median(times.without)).toFixed(1)} ms per push`);
+
+    // Clearing spots readies their sheets: for a station naming its crew (stations.crewMemberIds) the hook looks the
+    // crew up once per push; for one naming none it mails every crew member. Same push size, hook on for both.
+    const crewed = randomUUID();
+    await push([{ collection: 'stations', recordId: crewed, fields: { eventId: ids.event, name: 'Crewed station', bands: ['20m'], mode: 'cw', powerW: 100, purpose: 'long-distance', crewMemberIds: [crewIds[0]], notes: '' } }], false);
+    const cleared = { named: [] as number[], none: [] as number[] };
+    for (let round = 0; round < ROUNDS * 2; round++) {
+      const named = round % 2 === 1;
+      const spots = Array.from({ length: SPOTS }, () => randomUUID());
+      await push(spots.map((id) => ({ collection: 'antennaSpots', recordId: id, fields: { eventId: ids.event, stationId: named ? crewed : ids.station, band: named ? '20m' : '40m', shape: 'flat', supportIds: [randomUUID(), randomUUID()], state: 'waiting-review', notes: '' } })), false);
+      const t0 = performance.now();
+      await push(spots.map((id) => ({ collection: 'antennaSpots', recordId: id, fields: { state: 'cleared' } })), true);
+      (named ? cleared.named : cleared.none).push(performance.now() - t0);
+    }
+    console.log(`push of ${SPOTS} spots cleared (lead + sheet-ready mails), with the hook, median:`);
+    console.log(`  station naming its crew         ${median(cleared.named).toFixed(1)} ms`);
+    console.log(`  station naming no crew (all)    ${median(cleared.none).toFixed(1)} ms`);
   } finally {
     await dataSource.destroy().catch(() => undefined);
     await cluster.stop();

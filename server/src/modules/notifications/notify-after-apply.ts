@@ -36,6 +36,13 @@ export function notificationsAfterApply(deps: Pick<AppDeps, 'config' | 'mail' | 
       // Batch: every notice of this push for one person goes into one e-mail.
       const byPerson = new Map<string, { who: Recipient; items: NoticeItem[] }>();
       const audience = new Map<NotificationKind, Recipient[]>();
+      // Spots of one station share its crew: look each crew list up once per push.
+      const crewAudience = new Map<string, Awaited<ReturnType<typeof namedCrewOf>>>();
+      const crewOf = async (ids: string[]) => {
+        const key = [...ids].sort().join(',');
+        if (!crewAudience.has(key)) crewAudience.set(key, await namedCrewOf(em, push.clubId, ids));
+        return crewAudience.get(key)!;
+      };
       const roleAudience = async (kind: NotificationKind) => {
         if (!audience.has(kind)) audience.set(kind, await recipientsOf(em, push.clubId, kind));
         return audience.get(kind)!;
@@ -47,7 +54,7 @@ export function notificationsAfterApply(deps: Pick<AppDeps, 'config' | 'mail' | 
           let noCrewNamed = false;
           if (kind === 'sheetReady') {
             // The station's own crew; a station that names no one (still a member) readies every crew member.
-            const crew = await namedCrewOf(em, push.clubId, spot.crewMemberIds);
+            const crew = await crewOf(spot.crewMemberIds);
             noCrewNamed = !crew.named;
             who = crew.named ? crew.recipients : await roleAudience(kind);
           } else who = await roleAudience(kind);
