@@ -71,7 +71,7 @@ export type SpotSummary = {
   band: string;
   shape: string;
   stationName: string;
-  /** The people the spot's station names as its crew (stations.crewMemberIds); empty when none is named. */
+  /** The people the spot's station names as its crew (stations.crewMemberIds); empty when none is named or the station was removed. */
   crewMemberIds: string[];
 };
 
@@ -79,9 +79,9 @@ export type SpotSummary = {
 export async function spotSummaries(db: Db, clubId: string, spotIds: string[]): Promise<Map<string, SpotSummary>> {
   if (spotIds.length === 0) return new Map();
   const rows: { id: string; event_id: string; event_name: string | null; band: string; shape: string; station_name: string | null; crew: unknown }[] = await db.query(
-    `SELECT s.id, s.event_id, e.name AS event_name, s.band, s.shape, st.name AS station_name, st.crew_member_ids AS crew FROM antenna_spots s
+    `SELECT s.id, s.event_id, e.name AS event_name, s.band, s.shape, st.name AS station_name, CASE WHEN st.deleted_at IS NULL THEN st.crew_member_ids END AS crew FROM antenna_spots s
      LEFT JOIN events e ON e.id = s.event_id AND e.club_id = s.club_id
-     LEFT JOIN stations st ON st.id = s.station_id AND st.club_id = s.club_id AND st.deleted_at IS NULL
+     LEFT JOIN stations st ON st.id = s.station_id AND st.club_id = s.club_id
      WHERE s.club_id = $1 AND s.id = ANY($2::uuid[]) AND s.deleted_at IS NULL`,
     [clubId, spotIds],
   );
