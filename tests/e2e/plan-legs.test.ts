@@ -7,12 +7,12 @@
 import { randomUUID } from 'node:crypto';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { legEndOffsetM } from '../../shared/plan';
+import { legEndOffsetM, planSite } from '../../shared/plan';
 import { api, apiSignIn, pullAll, until } from './helpers/api';
 import { browserForFile, byTestId, newPage, screenshot, type ViewportName } from './helpers/browser';
 import { DEMO_PASSWORD, DEMO_USERS } from './helpers/demo-users';
 import { baseUrl, signIn } from './helpers/session';
-import { eventReviewOnServer, liveOf, pushFrom, type Change } from './helpers/sync-push';
+import { eventReviewOnServer, eventSiteFileOnServer, liveOf, pushFrom, type Change } from './helpers/sync-push';
 
 const browser = browserForFile(beforeAll, afterAll);
 const tag = randomUUID().slice(0, 6);
@@ -178,6 +178,25 @@ describe('an inverted-V keeps the leg direction the lead chose', { timeout: 300_
     const [e] = await eventReviewOnServer(lead.token, clubId, eventId);
     expect(e.evaluated!.candidate.wireAzimuthDeg).toBe(90);
     expect(e.review.state).toBe('planned');
+    expect(errors).toEqual([]);
+  });
+
+  it('wide: “assign all stations” stores the direction the engine chose (one of its four for an inverted-V, none for a flat-top)', async () => {
+    const { page, errors } = await openAs('lead', 'wide', `/events/${eventId}/plan`);
+    await byTestId(page, 'candidate-0').waitFor({ timeout: 120_000 });
+    await byTestId(page, 'plan-assign-all').click();
+    await expect.poll(() => byTestId(page, 'plan-assign-message').textContent(), { timeout: 30_000 }).toMatch(/assigned by the engine/);
+    // The engine's pick for this station, from the same records (the app's worker runs the same planSite).
+    const file = await eventSiteFileOnServer(lead.token, clubId, eventId);
+    const pick = planSite(file).assignment.spots.find((x) => x.stationId === stationId)!.candidate!;
+    const want = { shape: pick.shape, supportIds: pick.supportIds, legAzimuthDeg: pick.shape === 'inverted-v' ? pick.wireAzimuthDeg : null };
+    const stored = await until('the engine’s pick on the server', async () => {
+      const s = await spotOnServer();
+      return s && s.fields.shape === want.shape && JSON.stringify(s.fields.supportIds) === JSON.stringify(want.supportIds) && s.fields.legAzimuthDeg === want.legAzimuthDeg && s;
+    });
+    if (pick.shape === 'inverted-v') expect([0, 45, 90, 135]).toContain(stored.fields.legAzimuthDeg);
+    const [e] = await eventReviewOnServer(lead.token, clubId, eventId);
+    expect(e.evaluated!.candidate.id).toBe(pick.id);
     expect(errors).toEqual([]);
   });
 });

@@ -29,8 +29,8 @@ export async function pushFrom(token: string, clubId: string, changes: Change[])
 
 export const liveOf = (all: PulledRecord[], collection: string) => all.filter((r) => r.collection === collection && r.deletedAt === null);
 
-/** The shared review of an event's spots from what the server holds (what every device computes). */
-export async function eventReviewOnServer(token: string, clubId: string, eventId: string) {
+/** The shared review of an event from what the server holds (what every device computes): spots and site file. */
+async function reviewOnServer(token: string, clubId: string, eventId: string) {
   const all = await pullAll(token, clubId);
   const asRecord = (r: PulledRecord) => ({ ...r.fields, id: r.id, clubId, deletedAt: r.deletedAt, createdAt: '', updatedAt: '' });
   const siteId = liveOf(all, 'events').find((e) => e.id === eventId)!.fields.siteId;
@@ -44,5 +44,15 @@ export async function eventReviewOnServer(token: string, clubId: string, eventId
     coax: liveOf(all, 'coax').map(asRecord),
   } as unknown as SiteRecords;
   const spots = liveOf(all, 'antennaSpots').filter((s) => s.fields.eventId === eventId).map(asRecord) as unknown as AntennaSpot[];
-  return evaluateEventSpots(records, spots, []).spots;
+  return evaluateEventSpots(records, spots, []);
+}
+
+/** The review of each live spot of the event, as every device computes it from what the server holds. */
+export async function eventReviewOnServer(token: string, clubId: string, eventId: string) {
+  return (await reviewOnServer(token, clubId, eventId)).spots;
+}
+
+/** The site file the planning engine reads for the event (what the app's planner is given). */
+export async function eventSiteFileOnServer(token: string, clubId: string, eventId: string) {
+  return (await reviewOnServer(token, clubId, eventId)).file;
 }
