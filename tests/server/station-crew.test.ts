@@ -103,3 +103,30 @@ describe('the demo names a crew on one station and none on the other (both sheet
     }
   });
 });
+
+describe('a demo seeded before stations had crews gains the demo crew once', () => {
+  it('Station 2 with no crew and no clock for the field gets crew@kestrel.test; a crew someone set (even none) is kept', async () => {
+    const t = await startTestApp();
+    try {
+      const { eventId } = await seedDemo(t.deps);
+      const s2 = "SELECT id FROM stations WHERE event_id = $1 AND name = 'Station 2 (high bands)'";
+      const [{ id }]: { id: string }[] = await t.deps.dataSource.query(s2, [eventId]);
+      // As a demo seeded before migration 1796190000000 looks: empty crew, no clock for the field.
+      await t.deps.dataSource.query("UPDATE stations SET crew_member_ids = '[]'::jsonb, field_clocks = field_clocks - 'crewMemberIds' WHERE id = $1", [id]);
+      const [{ seq: before }]: { seq: string }[] = await t.deps.dataSource.query('SELECT change_seq AS seq FROM stations WHERE id = $1', [id]);
+      expect((await seedDemo(t.deps)).created).toBe(true);
+      const [after]: { crew: string[]; seq: string; clocks: Record<string, string> }[] = await t.deps.dataSource.query('SELECT crew_member_ids AS crew, change_seq AS seq, field_clocks AS clocks FROM stations WHERE id = $1', [id]);
+      const [crewUser]: { id: string }[] = await t.deps.dataSource.query("SELECT id FROM users WHERE email = 'crew@kestrel.test'");
+      expect(after.crew).toEqual([crewUser.id]);
+      expect(BigInt(after.seq)).toBeGreaterThan(BigInt(before)); // devices pull the change
+      expect(after.clocks.crewMemberIds).toBeTruthy();
+      // The lead later clears the crew on purpose (a clock for the field): reseeding leaves it cleared.
+      await t.deps.dataSource.query("UPDATE stations SET crew_member_ids = '[]'::jsonb WHERE id = $1", [id]);
+      expect((await seedDemo(t.deps)).created).toBe(false);
+      const [kept]: { crew: string[] }[] = await t.deps.dataSource.query('SELECT crew_member_ids AS crew FROM stations WHERE id = $1', [id]);
+      expect(kept.crew).toEqual([]);
+    } finally {
+      await t.close();
+    }
+  });
+});

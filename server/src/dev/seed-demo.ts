@@ -47,6 +47,24 @@ async function ensureRecord<C extends CollectionName>(deps: AppDeps, em: EntityM
   return true;
 }
 
+/**
+ * A demo seeded before stations had crews (migration 1796190000000) has its stations with no crew and no clock for
+ * the field: nobody ever chose "no crew" there, so the demo's crew is written once, as a server change (new clock,
+ * change_seq by the trigger) that every device pulls. A crew anyone has set, even to none, is left alone.
+ */
+async function backfillDemoCrew(deps: AppDeps, em: EntityManager, stationId: string, crewMemberIds: string[]): Promise<boolean> {
+  if (crewMemberIds.length === 0) return false;
+  const [row]: { clocks: Record<string, string> }[] = await em.query("SELECT field_clocks AS clocks FROM stations WHERE id = $1 AND crew_member_ids = '[]'::jsonb", [stationId]);
+  if (!row || row.clocks.crewMemberIds) return false;
+  const now = deps.clock.now();
+  const stamp = restWriteClock(now.getTime(), Object.values(row.clocks));
+  await em.query(
+    `UPDATE stations SET crew_member_ids = $2::jsonb, field_clocks = field_clocks || jsonb_build_object('crewMemberIds', $3::text), updated_at = $4 WHERE id = $1`,
+    [stationId, JSON.stringify(crewMemberIds), stamp, now.toISOString()],
+  );
+  return true;
+}
+
 export async function seedDemo(deps: AppDeps): Promise<SeedResult> {
   const { dataSource: ds } = deps;
   let created = false;
@@ -113,7 +131,9 @@ export async function seedDemo(deps: AppDeps): Promise<SeedResult> {
         if (!id) throw new Error(`demo station ${s.key} names ${email} as crew, who is not a demo user`);
         return id;
       });
-      created = (await ensureRecord(deps, em, 'stations', club, demoId(`station/${s.key}`), { ...s.fields, crewMemberIds, eventId })) || created;
+      const stationId = demoId(`station/${s.key}`);
+      created = (await ensureRecord(deps, em, 'stations', club, stationId, { ...s.fields, crewMemberIds, eventId })) || created;
+      created = (await backfillDemoCrew(deps, em, stationId, crewMemberIds)) || created;
     }
     for (const c of DEMO_COAX) {
       created = (await ensureRecord(deps, em, 'coax', club, demoId(`coax/${c.key}`), c.fields)) || created;
