@@ -34,6 +34,26 @@ describe('event spots → review (one function for app and server)', () => {
     expect(taller.review.reasons).toEqual(['Tree 3 changed since the review (position, height or ends).']);
   });
 
+  test('raising the station’s power after clearance sends the spot back: the RF-exposure distance grows with √P (47 CFR 1.1310 limits, OET-65 far-field power density S = P·G/(4πR²))', () => {
+    const far = tree(7, -150, 0);
+    const first = evaluateEventSpots(records([far]), [spot(76, far.id)], []).spots[0];
+    const decisions = first.results.map((r, i) => accept(90 + i, first.spot.id, r.key, first.fingerprint));
+    const cleared = { ...first.spot, state: 'cleared' as const, inputsFingerprint: first.fingerprint };
+    expect(evaluateEventSpots(records([far]), [cleared], decisions).spots[0].review.state).toBe('cleared');
+    const louder = { ...records([far]), stations: [{ ...station, powerW: 1500 }] };
+    const after = evaluateEventSpots(louder, [cleared], decisions).spots[0];
+    expect(after.review.state).toBe('waiting-review');
+    expect(after.review.reasons).toEqual(['The station’s power or mode changed since the review, so its RF-exposure distances changed.']);
+    // The exposure distance itself grew (S ∝ P at a fixed distance, so the distance for the same limit grows ∝ √P).
+    const exposure = (e: typeof first) => e.evaluated!.candidate.clearances.filter((c) => c.key.startsWith('rf'));
+    expect(exposure(after).map((c) => c.requiredM ?? 0).reduce((a, b) => Math.max(a, b), 0)).toBeGreaterThan(exposure(first).map((c) => c.requiredM ?? 0).reduce((a, b) => Math.max(a, b), 0));
+    // Moving an operating position is a change the review must see too; renaming the station is not.
+    const withOp = { ...records([far]), operatingPositions: [{ ...meta(77), siteId: site.id, label: 'Tent', ...at(-140, 5), notes: '' }] };
+    expect(evaluateEventSpots(withOp, [cleared], decisions).spots[0].review.reasons).toContain('An operating position was added, moved or removed since the review (the operators’ RF-exposure distance is checked to each).');
+    const renamed = { ...records([far]), stations: [{ ...station, name: 'CW station' }] };
+    expect(evaluateEventSpots(renamed, [cleared], decisions).spots[0].review.state).toBe('cleared');
+  });
+
   test('a spot on a removed support cannot be built and says so; deleted spots are left out', () => {
     const { spots } = evaluateEventSpots(records([]), [spot(72, uuid(4)), { ...spot(73, uuid(4)), deletedAt: T }], []);
     expect(spots).toHaveLength(1);

@@ -35,7 +35,16 @@ export function evaluateEventSpots(records: SiteRecords, spots: readonly Antenna
     const legAzimuthDeg = spot.shape === 'inverted-v' ? spot.legAzimuthDeg : null;
     const evaluated = evaluateSpot(build.file, { stationId: spot.stationId, band: spot.band, shape: spot.shape, supportIds: spot.supportIds, legAzimuthDeg });
     const results = evaluated ? reviewResultsOf(evaluated.candidate.clearances) : [];
-    const fingerprint = spotFingerprint({ site: records.site, supportIds: spot.supportIds, supports: records.supports, hazards: records.hazards, legAzimuthDeg });
+    const station = records.stations.find((s) => s.id === spot.stationId) ?? null;
+    const fingerprint = spotFingerprint({
+      site: records.site,
+      supportIds: spot.supportIds,
+      supports: records.supports,
+      hazards: records.hazards,
+      legAzimuthDeg,
+      station,
+      operatingPositions: records.operatingPositions,
+    });
     const supportLabels = spot.supportIds.map((id) => label.get(id) ?? 'A removed support');
     const mine = decisions.filter((d) => d.spotId === spot.id);
     const review = reviewSpot({ spot, results, decisions: mine, currentFingerprint: fingerprint, supportLabels });

@@ -63,7 +63,7 @@ describe('inverted-V leg bearing on the server', () => {
     expect(e.evaluated!.candidate.wireAzimuthDeg).toBe(0);
     expect(e.evaluated!.candidate.id).toMatch(/@0$/);
     expect(publicRf(e).level).toBe('clear');
-    expect(e.fingerprint).toMatch(/\.l[0-9a-f]{8}$/);
+    expect(e.fingerprint).toMatch(/\.l[0-9a-f]{8}\./);
     // What the app's "Send for review" writes: the fingerprint the lead sent it with.
     const sent = await push(app, clubId, leadPhone, [{ collection: 'antennaSpots', recordId: ids.spot, fields: { state: 'waiting-review', inputsFingerprint: e.fingerprint } }], nowMs + 1);
     expect(sent.rejected).toEqual([]);
