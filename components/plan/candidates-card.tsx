@@ -84,7 +84,7 @@ export function CandidatesCard({ plan, file, stations, supports, isWide, openIds
       {plan.computedIn === 'main-thread' ? (
         <Txt variant="caption" testID="plan-main-thread">Planning in this screen, not in the background: this browser could not start the background planner, so the screen may pause for a moment while a plan is worked out.</Txt>
       ) : null}
-      {chosen ? <Txt variant="caption" color={colors.inkMuted}>{chosen.usableCount} usable of {chosen.candidateCount} possible spots; {chosen.blockedCount} blocked{chosen.blockedBy.length ? ` (by ${chosen.blockedBy.map((b) => withLabels(b.key, labels)).join(', ')})` : ''}.</Txt> : null}
+      {chosen ? <Txt variant="caption" color={colors.inkMuted}>{chosen.usableCount} usable of {chosen.candidateCount} possible spots; {chosen.blockedCount} blocked{chosen.blockedBy.length ? ` (by ${chosen.blockedBy.map((b) => `${withLabels(b.key.replace(/^power-line:/, 'the power line '), labels)} ×${b.count}`).join(', ')})` : ''}.</Txt> : null}
       {list.length === 0 ? <Txt testID="candidates-none">No candidate passes these filters.</Txt> : null}
       {list.map((c, i) => (
         <View key={c.id}>
