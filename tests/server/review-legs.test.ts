@@ -106,6 +106,8 @@ describe('inverted-V leg bearing on the server', () => {
     expect(antennaSpotFieldsSchema.safeParse(fields).error?.issues[0]?.message).toBe('only an inverted-V has a leg bearing');
     const answer = await push(app, clubId, leadPhone, [{ collection: 'antennaSpots', recordId: flat, fields }], nowMs);
     expect(answer.rejected).toHaveLength(1);
+    // The writer is told the real reason, not that the record is gone.
+    expect(answer.rejected[0]).toMatchObject({ code: 'invalid', message: 'legAzimuthDeg: only an inverted-V has a leg bearing' });
     expect(typeof (await evaluateSpotOnServer(app.deps.dataSource.manager, clubId, flat))).toBe('string');
   });
 

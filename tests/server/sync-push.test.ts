@@ -121,6 +121,19 @@ describe('sync push', () => {
     expect(theirs.body).toEqual([]);
   });
 
+  it('an edit of a record the server does not have is refused as not-found, a whole new record breaking a cross-field rule as invalid', async () => {
+    const deviceId = `gone-${Date.now()}`;
+    const clockAt = (c: number) => encodeHlc({ wallMs: nowMs, counter: c, node: deviceId });
+    const res = await push(scout, deviceId, [
+      { mutationId: 1, collection: 'supports', recordId: newId(), op: 'upsert', fields: { notes: 'edit of a purged tree' }, clock: clockAt(1) },
+      { mutationId: 2, collection: 'hazards', recordId: newId(), op: 'upsert', fields: { siteId: newId(), kind: 'power-line', label: 'One-point line', points: [{ lat: 44.5, lon: -93.2 }] }, clock: clockAt(2) },
+    ]);
+    expect(res.body.rejected).toMatchObject([
+      { mutationId: 1, code: 'not-found' },
+      { mutationId: 2, code: 'invalid', message: 'points: a power line needs at least two points' },
+    ]);
+  });
+
   it('refuses by role, keeps measurements append-only, and lets crew change only a spot’s state', async () => {
     const deviceId = `crew-${Date.now()}`;
     const c = (n: number) => encodeHlc({ wallMs: nowMs, counter: n, node: deviceId });
