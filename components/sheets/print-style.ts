@@ -14,6 +14,10 @@ const CSS = `@media print {
     position: static !important; flex: none !important; transform: none !important; background: #fff !important;
   }
   [data-sheet="page"] { break-after: page; page-break-after: always; break-inside: avoid; margin-bottom: 0 !important; }
+  /* A sheet holds a wire, two supports with photos, coax, keep-out and cautions: drawn at 70 % it fits one
+     Letter or A4 page (a screen-sized sheet ran onto a second page once the leg directions were added). */
+  [data-sheet="page"] { zoom: 0.7; }
+  [data-sheet="page"] img { max-height: 160px !important; }
   [data-sheet="page"]:last-child { break-after: auto; page-break-after: auto; }
   [data-print="hide"], [role="navigation"], [data-testid="bottom-bar"], [data-testid="phone-header"],
   [data-testid="sheet-mark-up"], [data-testid="sheet-mark-down"] { display: none !important; }

@@ -167,6 +167,10 @@ describe('plan, review and the day on the demo scenario', { timeout: 600_000 }, 
     await page.reload();
     const state = byTestId(page, `review-state-${spot.id}`);
     await expect.poll(() => state.textContent(), { timeout: 60_000 }).toContain('Waiting for review');
+    // The reason shows once the phone holds both the new height and the earlier decisions (on a loaded machine the
+    // state can read "waiting" a moment before): wait for it, and on failure show the whole card.
+    const card = page.locator('[data-testid^="review-spot-"]', { has: state }).first();
+    await expect.poll(async () => (await card.textContent()) ?? '', { timeout: 60_000 }).toMatch(/changed since the review/);
     expect(await byTestId(page, `review-reason-${spot.id}`).first().textContent()).toMatch(/changed since the review/);
   });
 
