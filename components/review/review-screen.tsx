@@ -11,7 +11,7 @@ import { useMembers } from '@/hooks/api/use-members';
 import { useSession } from '@/hooks/auth/use-session';
 import { useEventRecords } from '@/hooks/plan/use-event-records';
 import { useSpotReviews } from '@/hooks/plan/use-spot-reviews';
-import { useMutate } from '@/hooks/sync';
+import { useMutate, useSyncStatus } from '@/hooks/sync';
 import { useCurrentClub } from '@/hooks/use-current-club';
 import { decisionProblem, type SpotEvaluation } from '@/shared/review';
 import { can, reviewDecisionFieldsSchema, type SpotState } from '@/shared/schemas';
@@ -27,11 +27,16 @@ export function ReviewScreen({ eventId }: { eventId: string }) {
   const records = useEventRecords(eventId);
   const reviews = useSpotReviews(records);
   const mutate = useMutate();
+  const sync = useSyncStatus();
   const [error, setError] = useState<string | null>(null);
   if (records === undefined) return <ActivityIndicator color={colors.action} size="large" style={styles.loading} testID="review-loading" />;
   if (records === null || !reviews) return <Screen title="Review"><ErrorText boxed message="This event or its site is not on this device yet. Connect once so it can sync." testID="review-missing" /></Screen>;
   if (role === 'crew') return <RoleNotice eventId={eventId} />;
-  const canDecide = !!role && can(role, 'review.decide') && !!user;
+  const mayDecide = !!role && can(role, 'review.decide') && !!user;
+  // Until this device has finished its first sync it may hold only part of the survey (a pull comes in pages): a
+  // decision made on part of the hazards would be refused by the server, so the buttons wait for the whole picture.
+  const firstSyncDone = sync.lastSyncedAt !== null;
+  const canDecide = mayDecide && firstSyncDone;
   const stationName = (id: string) => records.stations.find((s) => s.id === id)?.name ?? 'A removed station';
   const nameOf = (id: string) => members.data?.find((m) => m.userId === id)?.displayName ?? (id === user?.id ? 'you' : 'a safety officer');
   const labels = labelsOf(records.supports, records.hazards, records.operatingPositions, records.stations, records.coax);
@@ -54,7 +59,12 @@ export function ReviewScreen({ eventId }: { eventId: string }) {
   return (
     <Screen title="Review" subtitle={`${records.event.name} · ${waiting} spot${waiting === 1 ? '' : 's'} waiting`} testID="review-screen">
       {error ? <ErrorText boxed message={error} testID="review-error" /> : null}
-      {!canDecide ? <Txt testID="review-read-only" color={colors.inkMuted}>Only the safety officer decides reviews; you can see where each spot stands.</Txt> : null}
+      {!mayDecide ? <Txt testID="review-read-only" color={colors.inkMuted}>Only the safety officer decides reviews; you can see where each spot stands.</Txt> : null}
+      {mayDecide && !firstSyncDone ? (
+        <Txt testID="review-first-sync" color={colors.warning}>
+          This device is still getting the club’s records. Decisions open once its first sync has finished, so that they are made on everything the scouts recorded.
+        </Txt>
+      ) : null}
       {queue.length === 0 ? <Txt testID="review-empty">No spots to review yet: the lead assigns spots and sends them for review.</Txt> : null}
       {queue.map((s) => {
         const confirmable = s.review.results.filter((r) => r.needs === 'confirm').length;
