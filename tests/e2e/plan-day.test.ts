@@ -151,6 +151,9 @@ describe('plan, review and the day on the demo scenario', { timeout: 600_000 }, 
       await page.waitForTimeout(150);
     }
     await until('five spots cleared on the safety phone', async () => (await page.locator('[data-testid^="review-state-"]', { hasText: 'Cleared to raise' }).count()) === 5);
+    // The decisions are on the server before anything else changes (a decision still in the phone's outbox when a
+    // support changes arrives stale and is refused, as it should be).
+    await expect.poll(() => byTestId(page, 'sync-indicator-headline').textContent(), { timeout: 60_000 }).toContain('All changes synced');
     expect(await byTestId(page, `review-state-${blockedSpotId}`).textContent()).toContain('Sent back');
     await screenshot(page, 'review-cleared', 'phone');
     await waitForMail(DEMO_USERS.lead, /cleared to raise/, 60_000);
