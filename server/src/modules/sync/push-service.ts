@@ -136,9 +136,9 @@ async function applyInTransaction(em: EntityManager, req: PushRequest, ctx: Push
       if (!checked.ok) {
         // Valid field by field but missing fields a new record needs: an edit of a record this server no longer has.
         // (Every field present and valid on its own but the whole refused — a cross-field rule — is just invalid.)
-        const missingSome = Object.keys(fieldShape(m.collection)).some((k) => !(k in m.fields) && !fieldShape(m.collection)[k]!.safeParse(undefined).success);
-        const asEdit = checkEditedFields(m.collection, m.fields);
-        if (asEdit.ok && missingSome) refuse('not-found', `no such record in ${m.collection}: it may have been removed for good`);
+        const shape = fieldShape(m.collection);
+        const missingSome = () => Object.entries(shape).some(([k, field]) => !(k in m.fields) && !field.safeParse(undefined).success);
+        if (checkEditedFields(m.collection, m.fields).ok && missingSome()) refuse('not-found', `no such record in ${m.collection}: it may have been removed for good`);
         else refuse('invalid', checked.message, checked.details);
         continue;
       }
